@@ -1,0 +1,31 @@
+import { defineConfig } from 'vitest/config';
+import path from 'node:path';
+
+// Unit tests sit beside the code; integration tests (real MariaDB, started by scripts/test.mjs)
+// live in tests/integration. End-to-end tests run separately through scripts/test.mjs.
+export default defineConfig({
+  resolve: { alias: { '@': path.resolve(import.meta.dirname) } },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'unit',
+          include: ['lib/**/*.test.ts', 'services/**/*.test.ts', 'components/**/*.test.ts', 'db/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'integration',
+          include: ['tests/integration/**/*.test.ts'],
+          environment: 'node',
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+    ],
+  },
+});
