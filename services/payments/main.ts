@@ -17,7 +17,8 @@ const standIn = await startPaymentsStandIn({
   host: process.env.PAYMENTS_HOST ?? '127.0.0.1',
   webhookUrl: process.env.PAYMENTS_WEBHOOK_URL ?? 'http://localhost:3000/api/payments/webhook',
   webhookSecret: process.env.STRIPE_WEBHOOK_SECRET ?? 'whsec_waygrade_local',
-  publicUrl: process.env.PAYMENTS_PUBLIC_URL ?? `http://localhost:${port}`,
+  // Unset means http://localhost:<the port actually bound>, i.e. http://localhost:12111 by default.
+  publicUrl: process.env.PAYMENTS_PUBLIC_URL || undefined,
   retryDelaysMs: retryDelaysFromEnv(process.env.PAYMENTS_WEBHOOK_RETRY_DELAYS_MS),
   stateFile: process.env.PAYMENTS_STATE_FILE || undefined,
 });

@@ -48,33 +48,32 @@ export async function startWebhookReceiver(): Promise<WebhookReceiver> {
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
   const { port } = server.address() as AddressInfo;
 
+  const waitFor: WebhookReceiver['waitFor'] = (select, count = 1, timeoutMs = 5_000) =>
+    new Promise((resolve, reject) => {
+      const timer = setTimeout(
+        () => reject(new Error(`expected ${count} matching webhooks within ${timeoutMs} ms, got ${received.filter(select).length}`)),
+        timeoutMs,
+      );
+      const check = () => {
+        const selected = received.filter(select);
+        if (selected.length >= count) {
+          clearTimeout(timer);
+          resolve(selected);
+        } else {
+          waiters.push(check);
+        }
+      };
+      check();
+    });
+
   return {
     url: `http://127.0.0.1:${port}/api/payments/webhook`,
     received,
     answerWith(statuses) {
       scriptedStatuses = [...statuses];
     },
-    waitForCount(count, timeoutMs) {
-      return this.waitFor(() => true, count, timeoutMs);
-    },
-    waitFor(select, count = 1, timeoutMs = 5_000) {
-      return new Promise((resolve, reject) => {
-        const timer = setTimeout(
-          () => reject(new Error(`expected ${count} matching webhooks within ${timeoutMs} ms, got ${received.filter(select).length}`)),
-          timeoutMs,
-        );
-        const check = () => {
-          const selected = received.filter(select);
-          if (selected.length >= count) {
-            clearTimeout(timer);
-            resolve(selected);
-          } else {
-            waiters.push(check);
-          }
-        };
-        check();
-      });
-    },
+    waitFor,
+    waitForCount: (count, timeoutMs) => waitFor(() => true, count, timeoutMs),
     async close() {
       await new Promise<void>((resolve) => {
         server.close(() => resolve());
