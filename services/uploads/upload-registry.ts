@@ -36,10 +36,16 @@ export class UploadRegistry {
   private readonly registrationWaiters = new Map<string, Array<() => void>>();
   private readonly resultWaiters = new Map<string, Waiter>();
   private readonly earlyResults = new Map<string, CallbackOutcome>();
+  private readonly registeredAt = new Map<string, number>();
+
+  /** Presigned URLs live an hour by default; a registration older than that belongs to an abandoned upload. */
+  constructor(private readonly registrationLifetimeMs = 60 * 60 * 1000) {}
 
   register(fileKeys: string[], registration: UploadRegistration): void {
+    this.pruneAbandoned();
     for (const key of fileKeys) {
       this.registrations.set(key, registration);
+      this.registeredAt.set(key, Date.now());
       for (const wake of this.registrationWaiters.get(key) ?? []) wake();
       this.registrationWaiters.delete(key);
     }
@@ -49,11 +55,16 @@ export class UploadRegistry {
     const known = this.registrations.get(key);
     if (known) return known;
     await new Promise<void>((resolve) => {
-      const timer = setTimeout(resolve, timeoutMs);
       const wake = () => {
         clearTimeout(timer);
         resolve();
       };
+      const timer = setTimeout(() => {
+        const remaining = (this.registrationWaiters.get(key) ?? []).filter((waiting) => waiting !== wake);
+        if (remaining.length > 0) this.registrationWaiters.set(key, remaining);
+        else this.registrationWaiters.delete(key);
+        resolve();
+      }, timeoutMs);
       this.registrationWaiters.set(key, [...(this.registrationWaiters.get(key) ?? []), wake]);
     });
     return this.registrations.get(key);
@@ -61,13 +72,21 @@ export class UploadRegistry {
 
   forget(key: string): void {
     this.registrations.delete(key);
+    this.registeredAt.delete(key);
+    this.earlyResults.delete(key);
+  }
+
+  private pruneAbandoned(): void {
+    const cutoff = Date.now() - this.registrationLifetimeMs;
+    for (const [key, at] of this.registeredAt) if (at < cutoff) this.forget(key);
   }
 
   /** Called when the app posts /callback-result; the result may land before anyone waits for it. */
   settle(key: string, outcome: CallbackOutcome): void {
     const waiter = this.resultWaiters.get(key);
     if (!waiter) {
-      this.earlyResults.set(key, outcome);
+      // Only uploads in flight can have a result worth keeping for later.
+      if (this.registrations.has(key)) this.earlyResults.set(key, outcome);
       return;
     }
     clearTimeout(waiter.timer);
