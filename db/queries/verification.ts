@@ -1,0 +1,32 @@
+import 'server-only';
+import { and, desc, eq, ne } from 'drizzle-orm';
+import { db } from '@/db/client';
+import { machines, reports } from '@/db/schema';
+
+/** What the public may learn from a verification code: genuineness and version, nothing paid for. */
+export async function findReportByVerificationCode(code: string) {
+  const [row] = await db
+    .select({
+      id: reports.id,
+      inspectionId: reports.inspectionId,
+      version: reports.version,
+      status: reports.status,
+      releasedAt: reports.releasedAt,
+      withdrawnAt: reports.withdrawnAt,
+      maker: machines.maker,
+      model: machines.model,
+      serialNumber: machines.serialNumber,
+    })
+    .from(reports)
+    .innerJoin(machines, eq(machines.id, reports.machineId))
+    .where(and(eq(reports.verificationCode, code), ne(reports.status, 'draft')))
+    .limit(1);
+  if (!row) return null;
+  const [newest] = await db
+    .select({ version: reports.version, releasedAt: reports.releasedAt })
+    .from(reports)
+    .where(and(eq(reports.inspectionId, row.inspectionId), eq(reports.status, 'released')))
+    .orderBy(desc(reports.version))
+    .limit(1);
+  return { ...row, newerVersion: newest && newest.version > row.version ? newest : null };
+}

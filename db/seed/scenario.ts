@@ -1,0 +1,58 @@
+// The invented demo marketplace: the Brenmark valley and its neighbours. No real firms or people.
+
+export const WORKSHOPS = [
+  { name: 'Kellbrook Precision Turning', town: 'Kellbrook', region: 'Brenmark', postcode: 'BK3 7LA' },
+  { name: 'Marrowgate Tool & Die', town: 'Marrowgate', region: 'Brenmark', postcode: 'BK9 2PE' },
+  { name: 'Fennick Cross Engineering', town: 'Fennick Cross', region: 'Lower Tessa', postcode: 'LT4 1RD' },
+  { name: 'Ravelstone Works', town: 'Ravelstone', region: 'Lower Tessa', postcode: 'LT8 6NB' },
+  { name: 'Orrin Quay Marine Services', town: 'Orrin Quay', region: 'Saltmarch', postcode: 'SM2 5QT' },
+  { name: 'Tessmoor Technical College', town: 'Tessmoor', region: 'Lower Tessa', postcode: 'LT1 9CA' },
+  { name: 'Quayside Machinery Brokers', town: 'Orrin Quay', region: 'Saltmarch', postcode: 'SM2 8HX' },
+  { name: 'Dunholt Used Tools', town: 'Dunholt', region: 'Brenmark', postcode: 'BK5 4JW' },
+  { name: 'Tolland Prototype Shop', town: 'Ashfold', region: 'Saltmarch', postcode: 'SM7 3EF' },
+  { name: 'Pryce Restoration Garage', town: 'Kellbrook', region: 'Brenmark', postcode: 'BK3 9TT' },
+  { name: 'Ostholt College Workshops', town: 'Ostholt', region: 'Lower Tessa', postcode: 'LT6 2AB' },
+  { name: 'Waygrade Inspection Office', town: 'Marrowgate', region: 'Brenmark', postcode: 'BK9 1AA' },
+] as const;
+
+/** Invented makers and models with their sizes (mm) and motor power (kW). */
+export const LATHE_MODELS = [
+  { maker: 'Corvane', model: 'CL-280', kind: 'general_purpose', swingMm: 280, centres: [500, 750], boreMm: 26, motorKw: 1.1, phases: 1 },
+  { maker: 'Corvane', model: 'CL-330', kind: 'general_purpose', swingMm: 330, centres: [750, 1000], boreMm: 38, motorKw: 2.2, phases: 3 },
+  { maker: 'Tallis & Wren', model: 'Model 13', kind: 'general_purpose', swingMm: 330, centres: [600, 1000], boreMm: 35, motorKw: 1.5, phases: 3 },
+  { maker: 'Tallis & Wren', model: 'Model 17 Toolroom', kind: 'toolroom', swingMm: 430, centres: [750], boreMm: 41, motorKw: 3, phases: 3 },
+  { maker: 'Oldreth', model: 'T400', kind: 'general_purpose', swingMm: 400, centres: [1000, 1500], boreMm: 52, motorKw: 5.5, phases: 3 },
+  { maker: 'Oldreth', model: 'T560', kind: 'general_purpose', swingMm: 560, centres: [1500, 2000, 3000], boreMm: 80, motorKw: 7.5, phases: 3 },
+  { maker: 'Vantor', model: 'Meridian 360', kind: 'general_purpose', swingMm: 360, centres: [1000], boreMm: 42, motorKw: 3, phases: 3 },
+  { maker: 'Kessmark', model: 'KZ-250 Toolroom', kind: 'toolroom', swingMm: 250, centres: [500], boreMm: 26, motorKw: 0.75, phases: 1 },
+  { maker: 'Ambrell', model: 'Series 5/460', kind: 'general_purpose', swingMm: 460, centres: [1000, 1500], boreMm: 58, motorKw: 5.5, phases: 3 },
+  { maker: 'Ambrell', model: 'Series 9/850', kind: 'general_purpose', swingMm: 850, centres: [3000], boreMm: 105, motorKw: 15, phases: 3 },
+] as const;
+
+export const ACCESSORY_SETS = [
+  '3-jaw chuck 160 mm, 4-jaw chuck 200 mm, faceplate, fixed and travelling steadies, quick-change tool post',
+  '3-jaw chuck 200 mm, faceplate, fixed steady, 4-way tool post, 2-axis DRO, maker’s manual',
+  '3-jaw chuck 125 mm, collet closer with 5C collets, quick-change tool post, coolant pump',
+  '4-jaw chuck 250 mm, faceplate, fixed steady, taper-turning attachment',
+  '3-jaw chuck 160 mm, 4-way tool post, thread-dial indicator, change gears complete',
+] as const;
+
+/** Inspection fees by size class, in euro cents (invented). */
+export const FEES = [
+  { sizeClass: 'small', amountMinor: 39_000 },
+  { sizeClass: 'medium', amountMinor: 49_000 },
+  { sizeClass: 'large', amountMinor: 69_000 },
+] as const;
+
+export const SITE_NOTES = [
+  'Ring the yard bell; the machine is in the back bay behind the saw.',
+  'Forklift available on site. Three-phase isolator beside the machine.',
+  'Access through the side gate on weekdays 7:30–16:00 only.',
+  'Ground floor, roller door 3 m wide. Ask for the shop foreman.',
+] as const;
+
+export const CANCEL_REASONS = [
+  'Machine sold privately before the visit.',
+  'Seller withdrew the listing.',
+  'Site not accessible on the booked date; seller will request again.',
+] as const;

@@ -1,0 +1,91 @@
+import type { InspectionStatus } from '@/db/schema/inspections';
+import type { Role } from '@/db/schema/users';
+
+export type { Role };
+
+export const ROLE_LABELS: Record<Role, string> = {
+  seller: 'Seller',
+  inspector: 'Inspector',
+  buyer: 'Buyer',
+  dealer: 'Dealer',
+  admin: 'Coordinator',
+};
+
+/** Everything a person can do in Waygrade. Server actions name one of these; the UI asks the same table. */
+export const PERMISSIONS = [
+  'machine.list.own',
+  'machine.edit.own',
+  'inspection.request',
+  'inspection.view.own',
+  'inspection.queue',
+  'inspection.book',
+  'inspection.assign',
+  'inspection.cancel',
+  'survey.edit.assigned',
+  'survey.submit.assigned',
+  'report.review',
+  'report.release',
+  'report.browse',
+  'report.buy',
+  'report.download.granted',
+  'compare.use',
+  'fees.manage',
+  'payments.refund',
+  'market.manage',
+  'users.manage',
+  'audit.view',
+] as const;
+export type Permission = (typeof PERMISSIONS)[number];
+
+export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
+  seller: ['machine.list.own', 'machine.edit.own', 'inspection.request', 'inspection.view.own', 'report.download.granted'],
+  inspector: ['survey.edit.assigned', 'survey.submit.assigned', 'report.download.granted'],
+  buyer: ['report.browse', 'report.buy', 'report.download.granted'],
+  dealer: ['report.browse', 'report.buy', 'report.download.granted', 'compare.use'],
+  admin: [
+    'inspection.queue',
+    'inspection.book',
+    'inspection.assign',
+    'inspection.cancel',
+    'report.review',
+    'report.release',
+    'report.browse',
+    'report.download.granted',
+    'compare.use',
+    'fees.manage',
+    'payments.refund',
+    'market.manage',
+    'users.manage',
+    'audit.view',
+  ],
+};
+
+export function can(role: Role | undefined | null, permission: Permission): boolean {
+  return role ? ROLE_PERMISSIONS[role].includes(permission) : false;
+}
+
+/** Which role may move an inspection from one status to the next. */
+export const STATUS_TRANSITIONS: ReadonlyArray<{ from: InspectionStatus; to: InspectionStatus; roles: readonly Role[] }> = [
+  { from: 'requested', to: 'booked', roles: ['admin'] },
+  { from: 'booked', to: 'booked', roles: ['admin'] },
+  { from: 'booked', to: 'on_site', roles: ['inspector'] },
+  { from: 'on_site', to: 'in_review', roles: ['inspector'] },
+  { from: 'in_review', to: 'on_site', roles: ['admin'] },
+  { from: 'in_review', to: 'released', roles: ['admin'] },
+  { from: 'requested', to: 'cancelled', roles: ['seller', 'admin'] },
+  { from: 'booked', to: 'cancelled', roles: ['seller', 'admin'] },
+  { from: 'on_site', to: 'cancelled', roles: ['admin'] },
+];
+
+export function mayTransition(role: Role, from: InspectionStatus, to: InspectionStatus): boolean {
+  return STATUS_TRANSITIONS.some((t) => t.from === from && t.to === to && t.roles.includes(role));
+}
+
+/** Navigation of the signed-in area by role: only pages that exist. */
+export const ROLE_NAVIGATION: Record<Role, ReadonlyArray<{ href: string; label: string }>> = {
+  seller: [{ href: '/dashboard', label: 'Overview' }],
+  inspector: [{ href: '/dashboard', label: 'Overview' }],
+  buyer: [{ href: '/dashboard', label: 'Overview' }],
+  dealer: [{ href: '/dashboard', label: 'Overview' }],
+  admin: [{ href: '/dashboard', label: 'Overview' }],
+};

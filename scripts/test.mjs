@@ -1,0 +1,72 @@
+// npm test: the whole stack on a separate test database, then type check, lint, unit, integration
+// and end-to-end tests. Ends with a plain "N passed, N failed" line; exits non-zero on any failure.
+import { readFileSync, rmSync, mkdirSync } from 'node:fs';
+import path from 'node:path';
+import { bringUp, buildApp, ensureNodeModules, root, startApp } from './lib/stack.mjs';
+import { run, waitForHttp } from './lib/processes.mjs';
+import { ensureDebianPackage } from './lib/debian-package.mjs';
+
+const startedAt = Date.now();
+const checks = [];
+let stack;
+
+async function check(name, command, args, env) {
+  const t0 = Date.now();
+  console.log(`\n── ${name} ──`);
+  const code = await run(command, args, { cwd: root, env, allowFailure: true });
+  checks.push({ name, ok: code === 0, seconds: (Date.now() - t0) / 1000 });
+  return code === 0;
+}
+
+function vitestCounts(file) {
+  try {
+    const report = JSON.parse(readFileSync(file, 'utf8'));
+    return { passed: report.numPassedTests ?? 0, failed: (report.numFailedTests ?? 0) + (report.numRuntimeErrorTestSuites ?? 0) };
+  } catch {
+    return { passed: 0, failed: 1 };
+  }
+}
+
+let exitCode = 1;
+try {
+  await ensureNodeModules();
+  const chromium = ensureDebianPackage('chromium', 'chromium');
+  stack = await bringUp('test', { resetDatabase: true });
+  const env = { ...stack.env, CHROMIUM_PATH: chromium, NODE_ENV: 'test' };
+
+  await run(process.execPath, ['--import', 'tsx', 'db/seed/index.ts'], { cwd: root, env });
+
+  await check('type check', process.execPath, ['node_modules/typescript/bin/tsc', '--noEmit', '-p', '.'], env);
+  await check('lint', process.execPath, ['node_modules/eslint/bin/eslint.js', '.', '--max-warnings=0'], env);
+
+  await buildApp({ ...env, NODE_ENV: 'production' });
+  const app = startApp(stack.group, env, stack.ports.app);
+  await waitForHttp(stack.appUrl, { child: app, name: 'app' });
+
+  const resultsDir = path.join(root, 'tmp');
+  rmSync(resultsDir, { recursive: true, force: true });
+  mkdirSync(resultsDir, { recursive: true });
+  const resultsFile = path.join(resultsDir, 'vitest-results.json');
+  await run(
+    process.execPath,
+    ['node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${resultsFile}`],
+    { cwd: root, env, allowFailure: true },
+  );
+  const tests = vitestCounts(resultsFile);
+  const checkPassed = checks.filter((c) => c.ok).length;
+  const checkFailed = checks.length - checkPassed;
+  for (const c of checks) console.log(`${c.ok ? 'ok  ' : 'FAIL'} ${c.name} (${c.seconds.toFixed(1)} s)`);
+  console.log(`tests: ${tests.passed} passed, ${tests.failed} failed; took ${Math.round((Date.now() - startedAt) / 1000)} s`);
+  const passed = tests.passed + checkPassed;
+  const failed = tests.failed + checkFailed;
+  exitCode = failed === 0 && passed > 0 ? 0 : 1;
+  await stack.stop();
+  stack = undefined;
+  console.log(`${passed} passed, ${failed} failed`);
+} catch (error) {
+  console.error(error instanceof Error ? error.message : error);
+  console.log('0 passed, 1 failed');
+} finally {
+  if (stack) await stack.stop();
+  process.exit(exitCode);
+}
