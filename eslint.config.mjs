@@ -16,7 +16,7 @@ const SCORING_FORBIDDEN = [
 const config = [
   ...nextCoreWebVitals,
   ...nextTypescript,
-  { ignores: ['.next/**', 'node_modules/**', '.data/**', 'tmp/**', 'db/migrations/**', 'next-env.d.ts'] },
+  { ignores: ['.next/**', '.next-*/**', 'node_modules/**', '.data/**', 'tmp/**', 'db/migrations/**', 'next-env.d.ts'] },
   {
     files: ['lib/scoring/**/*.ts'],
     ignores: ['lib/scoring/cli.ts', 'lib/scoring/write-json-schema.ts', 'lib/scoring/**/*.test.ts'],

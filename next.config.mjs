@@ -8,6 +8,8 @@ const securityHeaders = [
 
 const nextConfig = {
   reactStrictMode: true,
+  // Separate build folders let several working copies of the stack run side by side (scripts/lib/stack.mjs).
+  distDir: process.env.NEXT_DIST_DIR || '.next',
   poweredByHeader: false,
   // Types are checked once by `npm test` (tsc --noEmit over the whole project), not in every build.
   typescript: { ignoreBuildErrors: true },

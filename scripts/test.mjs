@@ -43,7 +43,7 @@ try {
   const app = startApp(stack.group, env, stack.ports.app);
   await waitForHttp(stack.appUrl, { child: app, name: 'app' });
 
-  const resultsDir = path.join(root, 'tmp');
+  const resultsDir = path.join(root, 'tmp', `test-run-${process.env.WAYGRADE_PORT_OFFSET ?? 0}`);
   rmSync(resultsDir, { recursive: true, force: true });
   mkdirSync(resultsDir, { recursive: true });
   const resultsFile = path.join(resultsDir, 'vitest-results.json');
