@@ -1,0 +1,23 @@
+/**
+ * The appraisers' condition scale [src: machinery-appraisal condition terms] and the score
+ * (0–100) at which each grade begins. The score edges are a Waygrade rule (common practice).
+ */
+export const CONDITION_GRADES = ['Excellent', 'Very good', 'Good', 'Fair', 'Poor', 'Salvage'] as const;
+export type ConditionGrade = (typeof CONDITION_GRADES)[number];
+
+export const CONDITION_SCALE: readonly { grade: ConditionGrade; fromScore: number; meaning: string }[] = [
+  { grade: 'Excellent', fromScore: 88, meaning: 'like new; no defects that affect accuracy' },
+  { grade: 'Very good', fromScore: 75, meaning: 'light wear; holds close work with care' },
+  { grade: 'Good', fromScore: 60, meaning: 'normal wear for its age; fit for general work' },
+  { grade: 'Fair', fromScore: 45, meaning: 'marked wear; needs some repair for accurate work' },
+  { grade: 'Poor', fromScore: 25, meaning: 'major repairs needed before productive use' },
+  { grade: 'Salvage', fromScore: 0, meaning: 'worth its parts or scrap more than its use' },
+];
+
+export function gradeForScore(score: number): ConditionGrade {
+  return (CONDITION_SCALE.find((g) => score >= g.fromScore) ?? CONDITION_SCALE[CONDITION_SCALE.length - 1]!).grade;
+}
+
+export function gradeRank(grade: ConditionGrade): number {
+  return CONDITION_GRADES.indexOf(grade);
+}

@@ -1,0 +1,26 @@
+import { fmt } from '../format-number';
+import type { ScoringResult, SubsystemResult } from '../result';
+import { SUBSYSTEM_TABLE } from '../subsystems';
+import { gradeForScore } from './condition-scale';
+
+/**
+ * Overall score = 0.7 × subsystem scores weighted by SUBSYSTEM_TABLE (over assessed subsystems) +
+ * 0.3 × the worst subsystem score, then placed on the appraisers' scale. No assessed subsystem → no
+ * grade at all rather than a guess. Waygrade rule (common practice).
+ */
+export function overallCondition(subsystems: readonly SubsystemResult[]): ScoringResult['overall'] {
+  const assessed = subsystems.filter((s) => s.score !== null);
+  if (!assessed.length) {
+    return { score: null, condition: null, explanation: 'No check was measured, so no condition can be given.' };
+  }
+  const totalWeight = assessed.reduce((s, x) => s + SUBSYSTEM_TABLE[x.id].weight, 0);
+  const mean = assessed.reduce((s, x) => s + SUBSYSTEM_TABLE[x.id].weight * x.score!, 0) / totalWeight;
+  const worst = assessed.reduce((a, b) => (b.score! < a.score! ? b : a));
+  const score = Number((0.7 * mean + 0.3 * worst.score!).toFixed(2));
+  const condition = gradeForScore(score);
+  return {
+    score,
+    condition,
+    explanation: `score = 0.7 × weighted subsystem mean ${fmt(mean, 1)} + 0.3 × worst subsystem (${worst.label}) ${fmt(worst.score!, 1)} = ${fmt(score, 1)} → ${condition}; ${assessed.length} of ${subsystems.length} subsystems assessed.`,
+  };
+}

@@ -1,0 +1,61 @@
+import { isNotMeasured, type CheckDefinition } from '../check-definition';
+import type { CheckResult } from '../result';
+import { describeSource } from '../source-marks';
+import { bandFor } from './bands';
+import { checkScore } from './check-score';
+
+/** Run each check module and shape its outcome as a report line with its full working. */
+export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey: S, context: C): CheckResult[] {
+  return checks.map((check) => {
+    const outcome = check.evaluate(survey, context);
+    if (isNotMeasured(outcome)) {
+      return {
+        id: check.id,
+        subsystem: check.subsystem,
+        label: check.label,
+        status: 'not-measured',
+        measured: null,
+        permissible: null,
+        q: null,
+        band: null,
+        bandLabel: 'Not measured',
+        score: null,
+        weight: check.weight,
+        explanation: {
+          inputs: [],
+          formula: '',
+          source: '',
+          sourceMark: null,
+          text: `Not measured: ${outcome.notMeasured}. Counts against confidence; not assumed to pass.`,
+        },
+        details: {},
+      } satisfies CheckResult;
+    }
+    const band = bandFor(outcome.q);
+    const source = describeSource(outcome.permissible.source);
+    return {
+      id: check.id,
+      subsystem: check.subsystem,
+      label: check.label,
+      status: 'measured',
+      measured: outcome.measured,
+      permissible: outcome.permissible,
+      q: Number(outcome.q.toFixed(4)),
+      band: band.band,
+      bandLabel: band.label,
+      score: Number(checkScore(outcome.q).toFixed(2)),
+      weight: check.weight,
+      explanation: {
+        inputs: outcome.inputs,
+        formula: outcome.formula,
+        source,
+        sourceMark: outcome.permissible.source,
+        text: `${outcome.summary} Permissible: ${outcome.permissible.basis}. ${source}.`,
+      },
+      details: {
+        ...(outcome.details ?? {}),
+        ...(outcome.safetyFinding ? { safetyFinding: outcome.safetyFinding } : {}),
+      },
+    } satisfies CheckResult;
+  });
+}

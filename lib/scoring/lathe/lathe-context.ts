@@ -1,0 +1,116 @@
+import { classFactor, LATHE_LIMITS, swingClass, type LatheLimitId } from '../limits/lathe-limits';
+import type { Permissible } from '../check-definition';
+import { bedTwist, levelProfile, type LevelProfile, type TwistResult } from '../measure/level-profile';
+import { scaleTolerance } from '../measure/tolerance-scaling';
+import { fmt } from '../format-number';
+import type { ParsedLatheSurvey } from '../survey/lathe-survey';
+import { toMillimetres } from '../units/length';
+import { toMillimetresPerMetre } from '../units/slope';
+import { toKilowatts } from '../units/power';
+
+/**
+ * Figures every lathe check needs, worked out once per survey: size class and limit factor,
+ * instruments, and the bed profile (shared by three checks and the plot).
+ */
+export interface LatheContext {
+  latheType: 'general-purpose' | 'toolroom';
+  swingMm: number;
+  distanceBetweenCentresMm: number;
+  classFactor: number;
+  sizeClassLabel: string;
+  levelSensitivityMmPerM: number | null;
+  indicatorResolutionMm: number;
+  indicatorResolutionStated: boolean;
+  motorKw: number | null;
+  bed: {
+    profile: LevelProfile | null;
+    twist: TwistResult | null;
+    stationSpacingMm: number | null;
+    /** Why levelling results cannot be used, when they cannot. */
+    unusableReason: string | null;
+  };
+}
+
+/** Assumed when the survey does not say: a 0.002 mm test indicator (common practice). */
+const DEFAULT_INDICATOR_RESOLUTION_MM = 0.002;
+
+export function buildLatheContext(survey: ParsedLatheSurvey): LatheContext {
+  const m = survey.machine;
+  const swingMm = toMillimetres(m.swingOverBed);
+  const sensitivity = survey.instruments?.levelSensitivity;
+  const levelSensitivityMmPerM = sensitivity ? toMillimetresPerMetre(sensitivity) : null;
+  const resolution = survey.instruments?.indicatorResolution;
+  const klass = swingClass(swingMm);
+  return {
+    latheType: m.latheType,
+    swingMm,
+    distanceBetweenCentresMm: toMillimetres(m.distanceBetweenCentres),
+    classFactor: classFactor(swingMm, m.latheType),
+    sizeClassLabel: `${m.latheType}, ${klass.label}`,
+    levelSensitivityMmPerM,
+    indicatorResolutionMm: resolution ? toMillimetres(resolution) : DEFAULT_INDICATOR_RESOLUTION_MM,
+    indicatorResolutionStated: Boolean(resolution),
+    motorKw: m.motorPower ? toKilowatts(m.motorPower) : null,
+    bed: buildBed(survey, levelSensitivityMmPerM),
+  };
+}
+
+function buildBed(survey: ParsedLatheSurvey, sensitivity: number | null): LatheContext['bed'] {
+  const bed = survey.bedAndWays;
+  const run = bed?.levelling;
+  if (!run || (!run.longitudinalReadings && !run.transverseReadings)) {
+    return { profile: null, twist: null, stationSpacingMm: null, unusableReason: 'no level readings entered' };
+  }
+  if (sensitivity === null) {
+    return { profile: null, twist: null, stationSpacingMm: null, unusableReason: 'level readings entered without the level sensitivity' };
+  }
+  if (bed.standLoadState !== 'normal') {
+    // A precision level shows the bed twisting when heavy items rest on the stand (common
+    // practice), so readings taken with the stand loaded, or in an unknown state, do not describe the bed.
+    const state = bed.standLoadState === 'extra-load-on-stand' ? 'with extra load on the stand' : 'with the stand load state not recorded';
+    return {
+      profile: null,
+      twist: null,
+      stationSpacingMm: null,
+      unusableReason: `levelling was done ${state}; it is only valid with the stand in its normal state — re-level`,
+    };
+  }
+  const spacingMm = toMillimetres(run.stationSpacing);
+  const profile = run.longitudinalReadings
+    ? levelProfile({
+        readingsDivisions: run.longitudinalReadings,
+        sensitivityMmPerM: sensitivity,
+        stationSpacingMm: spacingMm,
+        // Half a division over one base is the smallest height step the level resolves.
+        resolutionUm: 0.5 * sensitivity * spacingMm,
+      })
+    : null;
+  const twist = run.transverseReadings ? bedTwist(run.transverseReadings, sensitivity) : null;
+  return { profile, twist, stationSpacingMm: spacingMm, unusableReason: null };
+}
+
+/** Permissible value for a check on this machine, with how it was arrived at. */
+export function latheLimit(id: LatheLimitId, ctx: LatheContext, measuringLengthMm?: number): Permissible {
+  const entry = LATHE_LIMITS[id];
+  const factor = entry.classFactorApplies ? ctx.classFactor : 1;
+  const base = entry.value * factor;
+  const factorText = factor === 1 ? '' : ` × ${fmt(factor, 2)} (${ctx.sizeClassLabel})`;
+  const overMm = 'overMm' in entry ? entry.overMm : undefined;
+  if (overMm !== undefined && measuringLengthMm !== undefined) {
+    const scaled = scaleTolerance({ valueMm: base, overMm }, measuringLengthMm);
+    return {
+      value: scaled.valueMm,
+      unit: entry.unit,
+      direction: entry.direction,
+      basis: `${fmt(entry.value)}/${overMm}${factorText} scaled to ${fmt(measuringLengthMm, 1)} mm by the proportional rule (min ${scaled.rule.minimumMm}, step ${scaled.rule.roundingStepMm})`,
+      source: entry.source,
+    };
+  }
+  return {
+    value: Number(base.toFixed(6)),
+    unit: entry.unit,
+    direction: entry.direction,
+    basis: `${fmt(entry.value)} ${entry.unit}${overMm !== undefined ? `/${overMm}` : ''}${factorText}`,
+    source: entry.source,
+  };
+}

@@ -1,0 +1,137 @@
+import { leastSquaresLine, lineAt, type Line, type Point } from './least-squares-line';
+
+/**
+ * Bed levelling: readings of a precision level (in vial divisions) taken at stations spaced one
+ * level base apart are turned into a height profile by cumulative sum,
+ *   z_k = Σ_{i≤k} r_i · s · L        (s in mm/m per division, L in m → z in mm),
+ * and the straightness deviation is the largest deviation above plus the largest below a
+ * reference line, by end points or by least squares [src: ISO 230-1:2012, definitions].
+ * Profiles are kept in µm for plotting because bed deviations are a few hundredths of a mm.
+ */
+
+export type ProfileShape = 'convex' | 'concave' | 'straight';
+
+export interface StraightnessAgainstLine {
+  line: Line;
+  /** Deviation of each profile point from the line, µm; positive = above the line. */
+  deviationsUm: number[];
+  maxAboveUm: number;
+  maxBelowUm: number;
+  /** Largest above + |largest below|, µm. */
+  straightnessUm: number;
+}
+
+export interface LevelProfile {
+  /** Profile points: x in mm from the first station, z in µm. */
+  points: Point[];
+  endPoint: StraightnessAgainstLine;
+  leastSquares: StraightnessAgainstLine;
+  /**
+   * Shape judged against the end-point line: convex = middle high (above the chord),
+   * concave = middle low. "straight" when neither side exceeds the given resolution.
+   */
+  shape: ProfileShape;
+  /** Worst straightness of any stretch no longer than the local window, against its own chord, µm. */
+  worstLocalUm: number | null;
+  localWindowMm: number;
+}
+
+export interface LevelProfileInput {
+  readingsDivisions: readonly number[];
+  sensitivityMmPerM: number;
+  stationSpacingMm: number;
+  /** Height step treated as no deviation when judging shape, µm (one instrument step). */
+  resolutionUm?: number;
+  localWindowMm?: number;
+}
+
+export function heightProfile(
+  readingsDivisions: readonly number[],
+  sensitivityMmPerM: number,
+  stationSpacingMm: number,
+): Point[] {
+  // mm/m × mm = µm: a 0.02 mm/m division over a 250 mm base is a 5 µm rise.
+  const risePerDivisionUm = sensitivityMmPerM * stationSpacingMm;
+  const points: Point[] = [{ x: 0, z: 0 }];
+  let z = 0;
+  readingsDivisions.forEach((r, i) => {
+    z += r * risePerDivisionUm;
+    points.push({ x: (i + 1) * stationSpacingMm, z });
+  });
+  return points;
+}
+
+export function straightnessAgainst(points: readonly Point[], line: Line): StraightnessAgainstLine {
+  const deviationsUm = points.map((p) => p.z - lineAt(line, p.x));
+  const maxAboveUm = Math.max(0, ...deviationsUm);
+  const maxBelowUm = Math.min(0, ...deviationsUm);
+  return { line, deviationsUm, maxAboveUm, maxBelowUm, straightnessUm: maxAboveUm - maxBelowUm };
+}
+
+export function endPointLine(points: readonly Point[]): Line {
+  const first = points[0];
+  const last = points[points.length - 1];
+  if (!first || !last || last.x === first.x) return { slope: 0, intercept: first?.z ?? 0 };
+  const slope = (last.z - first.z) / (last.x - first.x);
+  return { slope, intercept: first.z - slope * first.x };
+}
+
+export function profileShape(endPoint: StraightnessAgainstLine, resolutionUm: number): ProfileShape {
+  const above = endPoint.maxAboveUm;
+  const below = -endPoint.maxBelowUm;
+  if (above <= resolutionUm && below <= resolutionUm) return 'straight';
+  return above >= below ? 'convex' : 'concave';
+}
+
+/**
+ * Worst end-point straightness over every run of consecutive points spanning at most windowMm.
+ * null when no window holds an interior point (stations as far apart as the window itself), since
+ * a chord through two points shows no deviation at all.
+ */
+export function worstLocalStraightness(points: readonly Point[], windowMm: number): number | null {
+  let worst: number | null = null;
+  for (let i = 0; i < points.length; i++) {
+    for (let j = i + 2; j < points.length; j++) {
+      const a = points[i];
+      const b = points[j];
+      if (!a || !b || b.x - a.x > windowMm + 1e-9) break;
+      const segment = points.slice(i, j + 1);
+      const s = straightnessAgainst(segment, endPointLine(segment)).straightnessUm;
+      worst = worst === null ? s : Math.max(worst, s);
+    }
+  }
+  return worst;
+}
+
+export function levelProfile(input: LevelProfileInput): LevelProfile {
+  const localWindowMm = input.localWindowMm ?? 250;
+  const points = heightProfile(input.readingsDivisions, input.sensitivityMmPerM, input.stationSpacingMm);
+  const endPoint = straightnessAgainst(points, endPointLine(points));
+  const leastSquares = straightnessAgainst(points, leastSquaresLine(points));
+  return {
+    points,
+    endPoint,
+    leastSquares,
+    shape: profileShape(endPoint, input.resolutionUm ?? 0),
+    worstLocalUm: worstLocalStraightness(points, localWindowMm),
+    localWindowMm,
+  };
+}
+
+/**
+ * Twist: transverse level readings (divisions) at each station, converted to mm/m; the twist is
+ * the change of transverse level along the bed, max − min, in mm/m (compared with 0.04 mm/1000 mm,
+ * [memory: ISO 1708-style record]).
+ */
+export interface TwistResult {
+  transverseMmPerM: number[];
+  twistMmPerM: number;
+}
+
+export function bedTwist(transverseDivisions: readonly number[], sensitivityMmPerM: number): TwistResult {
+  const transverseMmPerM = transverseDivisions.map((r) => r * sensitivityMmPerM);
+  const twistMmPerM = transverseMmPerM.length
+    ? Math.max(...transverseMmPerM) - Math.min(...transverseMmPerM)
+    : 0;
+  return { transverseMmPerM, twistMmPerM };
+}

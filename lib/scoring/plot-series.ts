@@ -1,0 +1,40 @@
+import { lineAt } from './measure/least-squares-line';
+import type { LatheContext } from './lathe/lathe-context';
+import type { CheckResult, PlotSeries, SubsystemResult } from './result';
+
+const round = (n: number, digits = 3) => Number(n.toFixed(digits));
+
+/** Series the report and survey screens plot: bed profile with both reference lines, twist, wear. */
+export function plotSeries(ctx: LatheContext, checks: readonly CheckResult[], subsystems: readonly SubsystemResult[]): PlotSeries {
+  const profile = ctx.bed.profile;
+  const first = profile?.points[0];
+  const last = profile?.points[profile.points.length - 1];
+  const bedProfile =
+    profile && first && last
+      ? {
+          xUnit: 'mm' as const,
+          yUnit: 'µm' as const,
+          points: profile.points.map((p) => ({ x: round(p.x, 1), y: round(p.z) })),
+          endPointLine: [first, last].map((p) => ({ x: round(p.x, 1), y: round(lineAt(profile.endPoint.line, p.x)) })),
+          leastSquaresLine: [first, last].map((p) => ({ x: round(p.x, 1), y: round(lineAt(profile.leastSquares.line, p.x)) })),
+          shape: profile.shape,
+        }
+      : null;
+  const twist = ctx.bed.twist;
+  const bedTwist = twist
+    ? {
+        xUnit: 'mm' as const,
+        yUnit: 'mm/m' as const,
+        // Transverse readings are taken at the stations of the longitudinal run, one level base apart.
+        points: twist.transverseMmPerM.map((v, i) => ({ x: round((ctx.bed.stationSpacingMm ?? 0) * i, 1), y: round(v, 5) })),
+      }
+    : null;
+  return {
+    bedProfile,
+    bedTwist,
+    checkRatios: checks
+      .filter((c) => c.status === 'measured' && c.q !== null && c.band !== null)
+      .map((c) => ({ checkId: c.id, label: c.label, q: c.q!, band: c.band! })),
+    subsystemScores: subsystems.filter((s) => s.score !== null).map((s) => ({ subsystem: s.id, label: s.label, score: s.score! })),
+  };
+}

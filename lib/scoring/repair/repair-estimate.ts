@@ -1,0 +1,52 @@
+import { bandRank } from '../grading/bands';
+import { money, type Money } from '../money';
+import type { CheckResult } from '../result';
+import type { RepairCostCatalogue } from './cost-catalogue';
+
+export interface RepairLine {
+  actionId: string;
+  label: string;
+  cost: Money;
+  triggeredBy: string[];
+}
+
+export interface RepairEstimate {
+  catalogueId: string;
+  lines: RepairLine[];
+  total: Money;
+  explanation: string;
+}
+
+/**
+ * Map each measured check to the most severe repair its band reaches in the catalogue, merge
+ * checks calling for the same action, drop actions superseded by a heavier one, and total.
+ */
+export function estimateRepairs(checks: readonly CheckResult[], catalogue: RepairCostCatalogue): RepairEstimate {
+  const triggered = new Map<string, string[]>();
+  for (const check of checks) {
+    if (check.status !== 'measured' || check.band === null) continue;
+    const reached = catalogue.rules.filter((r) => r.checkId === check.id && bandRank(check.band!) >= bandRank(r.fromBand));
+    if (!reached.length) continue;
+    const mostSevere = Math.max(...reached.map((r) => bandRank(r.fromBand)));
+    for (const rule of reached.filter((r) => bandRank(r.fromBand) === mostSevere)) {
+      triggered.set(rule.actionId, [...(triggered.get(rule.actionId) ?? []), check.id]);
+    }
+  }
+  const superseded = new Set<string>();
+  for (const actionId of triggered.keys()) {
+    for (const s of catalogue.actions.find((a) => a.id === actionId)?.supersedes ?? []) superseded.add(s);
+  }
+  const lines: RepairLine[] = catalogue.actions
+    .filter((a) => triggered.has(a.id) && !superseded.has(a.id))
+    .map((a) => ({ actionId: a.id, label: a.label, cost: money(a.costMinor, catalogue.currency), triggeredBy: triggered.get(a.id)! }));
+  const total = money(lines.reduce((s, l) => s + l.cost.amountMinor, 0), catalogue.currency);
+  const droppedText = [...superseded].filter((id) => triggered.has(id));
+  return {
+    catalogueId: catalogue.id,
+    lines,
+    total,
+    explanation: lines.length
+      ? `${lines.length} repair actions from catalogue "${catalogue.id}"${droppedText.length ? `; ${droppedText.join(', ')} covered by heavier work` : ''}.`
+      : 'No finding calls for a repair.',
+  };
+}

@@ -1,0 +1,9 @@
+/**
+ * Versions stamped on every graded result. The app stores both beside each report so a released
+ * report can always be traced to the exact rules that produced it (a correction is a new version).
+ * Bump SCORING_VERSION whenever a limit, band edge, weight, cost or formula changes.
+ */
+export const SCORING_VERSION = '1.0.0';
+
+/** Version of the on-site survey format the schema in survey/ describes. */
+export const SURVEY_FORMAT_VERSION = 1 as const;
