@@ -4,7 +4,12 @@ import path from 'node:path';
 // Unit tests sit beside the code; integration tests (real MariaDB, started by scripts/test.mjs)
 // live in tests/integration. End-to-end tests run separately through scripts/test.mjs.
 export default defineConfig({
-  resolve: { alias: { '@': path.resolve(import.meta.dirname) } },
+  resolve: {
+    alias: {
+      '@': path.resolve(import.meta.dirname),
+      'server-only': path.resolve(import.meta.dirname, 'tests/support/server-only.ts'),
+    },
+  },
   test: {
     projects: [
       {

@@ -23,7 +23,7 @@ process.on('SIGTERM', () => void shutdown(0));
 try {
   stack = await bringUp('start');
   const { env, group, appUrl, ports } = stack;
-  await run(process.execPath, ['--import', 'tsx', 'db/seed/index.ts', '--if-empty'], { cwd: root, env });
+  await run(process.execPath, ['--conditions=react-server', '--import', 'tsx', 'db/seed/index.ts', '--if-empty'], { cwd: root, env });
 
   let app;
   if (dev) {

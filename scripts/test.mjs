@@ -34,7 +34,7 @@ try {
   stack = await bringUp('test', { resetDatabase: true });
   const env = { ...stack.env, CHROMIUM_PATH: chromium, NODE_ENV: 'test' };
 
-  await run(process.execPath, ['--import', 'tsx', 'db/seed/index.ts'], { cwd: root, env });
+  await run(process.execPath, ['--conditions=react-server', '--import', 'tsx', 'db/seed/index.ts'], { cwd: root, env });
 
   await check('type check', process.execPath, ['node_modules/typescript/bin/tsc', '--noEmit', '-p', '.'], env);
   await check('lint', process.execPath, ['node_modules/eslint/bin/eslint.js', '.', '--max-warnings=0'], env);

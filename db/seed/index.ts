@@ -1,21 +1,32 @@
 // Demo data: the invented Brenmark valley marketplace. `--if-empty` leaves a used database alone.
 import { randomUUID } from 'node:crypto';
-import { count } from 'drizzle-orm';
+import { count, eq } from 'drizzle-orm';
 import { closeDatabase, db } from '@/db/client';
 import {
+  comparableSales,
   inspectionFees,
   inspections,
   inspectionStatusEvents,
   machines,
+  orders,
+  reports,
+  repairCostItems,
+  reportAccessGrants,
+  surveys,
   users,
   workshops,
   type InspectionStatus,
 } from '@/db/schema';
+import { insertDraftReport, releaseDraftReport } from '@/db/queries/report-writes';
+import { loadScoreOptions } from '@/db/queries/scoring-inputs';
+import { defaultRepairCostCatalogue, scoreSurvey, SURVEY_FORMAT_VERSION, type LatheSurvey } from '@/lib/scoring';
 import { hashPassword } from '@/lib/auth/password';
 import { sizeClassForSwing } from '@/lib/machine-size';
 import { DEMO_LOGINS } from './demo-logins.mjs';
 import { seededRandom } from './random';
 import { ACCESSORY_SETS, CANCEL_REASONS, FEES, LATHE_MODELS, SITE_NOTES, WORKSHOPS } from './scenario';
+import { demoComparableSales } from './comparable-sales';
+import { demoSurvey, SURVEY_SECTIONS_IN_ORDER } from './demo-survey';
 
 const DAY = 24 * 60 * 60 * 1000;
 
@@ -59,6 +70,37 @@ export async function seedDemo(now = new Date()) {
 
   for (const fee of FEES) {
     await db.insert(inspectionFees).values({ machineType: 'centre_lathe', ...fee, updatedById: coordinator.id });
+  }
+  await db.insert(repairCostItems).values(
+    defaultRepairCostCatalogue.actions.map((action) => ({
+      code: action.id,
+      label: action.label,
+      subsystem: defaultRepairCostCatalogue.rules.find((rule) => rule.actionId === action.id)?.checkId.split('.')[0] ?? 'general',
+      costMinor: action.costMinor,
+      currency: defaultRepairCostCatalogue.currency,
+      updatedById: coordinator.id,
+    })),
+  );
+  await db.insert(comparableSales).values(demoComparableSales(random, now).map((sale) => ({ ...sale, createdById: coordinator.id })));
+
+  const releasedReports: number[] = [];
+  async function storeReport(input: {
+    inspectionId: number;
+    machineId: number;
+    survey: LatheSurvey;
+    surveyVersion: number;
+    inspectorId: string;
+    sellerId: string;
+    released: boolean;
+    at: Date;
+    reviewerId: string;
+  }) {
+    await db.transaction(async (tx) => {
+      const options = await loadScoreOptions(tx, Number(input.survey.machine.swingOverBed.value), input.at.getUTCFullYear());
+      const result = scoreSurvey(input.survey, options);
+      const { reportId } = await insertDraftReport(tx, { ...input, result });
+      if (input.released) await releaseDraftReport(tx, { reportId, reviewerId: input.reviewerId, sellerId: input.sellerId, at: input.at });
+    });
   }
 
   let machineIndex = 0;
@@ -150,9 +192,70 @@ export async function seedDemo(now = new Date()) {
       }
       await db.insert(inspectionStatusEvents).values(events.map((e) => ({ ...e, note: e.toStatus === 'cancelled' ? 'Cancelled on the seller’s request' : null })));
       created.push({ machineId, inspectionId, status: plan.status });
+
+      if (plan.status === 'on_site' || plan.status === 'in_review' || plan.status === 'released') {
+        const [machineRow] = await db.select().from(machines).where(eq(machines.id, machineId));
+        const inspectedOn = (scheduledAt ?? now).toISOString().slice(0, 10);
+        const wear = random.between(0.05, 0.95);
+        const survey = demoSurvey(machineRow!, {
+          wear,
+          random,
+          inspectedOn,
+          sectionsDone: plan.status === 'on_site' ? random.int(2, SURVEY_SECTIONS_IN_ORDER.length - 3) : undefined,
+          safetyDefect: machineIndex % 7 === 3,
+        });
+        const surveyVersion = random.int(12, 60);
+        await db.insert(surveys).values({
+          inspectionId,
+          formatVersion: SURVEY_FORMAT_VERSION,
+          version: surveyVersion,
+          data: survey,
+          updatedById: inspector.id,
+          submittedAt: plan.status === 'on_site' ? null : new Date(scheduledAt!.getTime() + 4 * 60 * 60 * 1000),
+        });
+        if (plan.status !== 'on_site') {
+          await storeReport({ inspectionId, machineId, survey, surveyVersion, inspectorId: inspector.id, sellerId: seller.id, released: plan.status === 'released', at: new Date(scheduledAt!.getTime() + 2 * DAY), reviewerId: coordinator.id });
+          releasedReports.push(inspectionId);
+        }
+      }
     }
   }
-  return { workshops: workshopIds.length, users: accounts.length, machines: created.length };
+  await seedPurchases(byRole('buyer').concat(byRole('dealer')), now);
+  return { workshops: workshopIds.length, users: accounts.length, machines: created.length, reports: releasedReports.length };
+}
+
+/** The first buyer and dealer have already bought a few released reports. */
+async function seedPurchases(buyers: Array<{ id: string }>, now: Date) {
+  const released = await db
+    .select({ id: reports.id, machineId: reports.machineId, swingMm: machines.swingMm })
+    .from(reports)
+    .innerJoin(machines, eq(machines.id, reports.machineId))
+    .where(eq(reports.status, 'released'))
+    .orderBy(reports.id);
+  const purchases = [
+    { buyer: buyers[0]!, report: released[0] },
+    { buyer: buyers[0]!, report: released[3] },
+    { buyer: buyers[buyers.length - 1]!, report: released[1] },
+  ];
+  for (const [i, purchase] of purchases.entries()) {
+    if (!purchase.report) continue;
+    const fee = FEES.find((f) => f.sizeClass === sizeClassForSwing(purchase.report!.swingMm))!;
+    const paidAt = new Date(now.getTime() - (10 - i) * DAY);
+    const [order] = await db
+      .insert(orders)
+      .values({
+        reportId: purchase.report.id,
+        buyerId: purchase.buyer.id,
+        amountMinor: fee.amountMinor,
+        status: 'paid',
+        providerCheckoutSessionId: `cs_demo_${purchase.report.id}_${i}`,
+        providerPaymentIntentId: `pi_demo_${purchase.report.id}_${i}`,
+        paidAt,
+        createdAt: paidAt,
+      })
+      .$returningId();
+    await db.insert(reportAccessGrants).values({ reportId: purchase.report.id, userId: purchase.buyer.id, reason: 'purchase', orderId: order!.id, grantedAt: paidAt });
+  }
 }
 
 async function main() {
@@ -163,7 +266,7 @@ async function main() {
     return;
   }
   const summary = await seedDemo();
-  console.log(`Demo data: ${summary.workshops} workshops, ${summary.users} people, ${summary.machines} machines`);
+  console.log(`Demo data: ${summary.workshops} workshops, ${summary.users} people, ${summary.machines} machines, ${summary.reports} reports`);
 }
 
 main()
