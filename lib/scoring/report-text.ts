@@ -2,6 +2,9 @@ import { fmt } from './format-number';
 import { formatMoney } from './money';
 import type { ScoringResult } from './result';
 
+/** Units of measured quantities; other checks (ratings, device states) read better as words. */
+const PHYSICAL_UNITS = new Set(['mm', 'mm/m', 'mm/s', 'K', 's', 'Ω', 'MΩ', 'mm²/s']);
+
 /** Plain-text summary of a graded report, for the CLI and for e-mail bodies. */
 export function formatReportText(r: ScoringResult): string {
   const m = r.machine;
@@ -30,8 +33,13 @@ export function formatReportText(r: ScoringResult): string {
   lines.push('');
   lines.push('CHECKS (q = measured / permissible):');
   for (const c of r.checks.filter((c) => c.status === 'measured')) {
-    const measured = c.measured ? `${fmt(c.measured.value, 4)} ${c.measured.unit}${c.measured.text ? ` [${c.measured.text}]` : ''}` : '';
-    const permitted = c.permissible ? `${fmt(c.permissible.value, 4)} ${c.permissible.unit}` : '';
+    const physical = c.measured !== null && PHYSICAL_UNITS.has(c.measured.unit);
+    const measured = !c.measured
+      ? ''
+      : physical
+        ? `${fmt(c.measured.value, 4)} ${c.measured.unit}${c.measured.text ? ` [${c.measured.text}]` : ''}`
+        : (c.measured.text ?? `${fmt(c.measured.value, 4)} ${c.measured.unit}`);
+    const permitted = !c.permissible ? '' : physical ? `${fmt(c.permissible.value, 4)} ${c.permissible.unit}` : c.permissible.basis;
     lines.push(`  ${c.bandLabel.padEnd(11)} q=${fmt(c.q ?? 0, 2).padEnd(6)} ${c.label}: ${measured} vs ${permitted}`);
   }
   const missing = r.checks.filter((c) => c.status === 'not-measured');

@@ -38,7 +38,9 @@ export function scaleTolerance(
   rule: ScalingRule = IS_6040_SCALING_RULE,
 ): ScaledTolerance {
   const proportionalMm = (stated.valueMm * lengthMm) / stated.overMm;
-  const rounded = roundToStep(proportionalMm, rule.roundingStepMm);
+  // Rounding applies to a value worked out for another length; at the stated length the stated
+  // value stands as published (0.015/300 stays 0.015 over 300 mm).
+  const rounded = lengthMm === stated.overMm ? stated.valueMm : roundToStep(proportionalMm, rule.roundingStepMm);
   const valueMm = Math.max(rule.minimumMm, rounded);
   return { valueMm, proportionalMm, lengthMm, rule, limitedByMinimum: rounded < rule.minimumMm };
 }

@@ -9,7 +9,7 @@ import type { CostApproach } from './valuation-types';
 /**
  * Cost approach [src: machinery & equipment appraisal definitions of value]: replacement cost new
  * × percent good (age-life, effective age moved by condition) − cost of the repairs the findings
- * call for = fair market value; orderly and forced liquidation values as shares of it.
+ * call for = fair market value, never below the residual value; orderly and forced liquidation values as shares of it.
  */
 export interface CostApproachInput {
   latheType: 'general-purpose' | 'toolroom';
@@ -31,7 +31,11 @@ export function costApproach(input: CostApproachInput): CostApproach | null {
   const percentGood = percentGoodByAgeLife(ea, life, tables.residualPercentGood);
   const depreciated = multiplyMoney(rcn.cost, percentGood);
   const repairs = input.repairTotal.currency === tables.currency ? input.repairTotal.amountMinor : 0;
-  const fmv = money(Math.max(0, depreciated.amountMinor - repairs), tables.currency);
+  // Never below the residual value: a complete machine of its kind still sells for parts or as a
+  // project even when a full repair would cost more than it is worth (common practice).
+  const floor = multiplyMoney(rcn.cost, tables.residualPercentGood);
+  const floored = depreciated.amountMinor - repairs < floor.amountMinor;
+  const fmv = money(Math.max(floor.amountMinor, depreciated.amountMinor - repairs), tables.currency);
   const olv = multiplyMoney(fmv, tables.orderlyLiquidationRatio);
   const flv = multiplyMoney(fmv, tables.forcedLiquidationRatio);
   const working = [
@@ -41,7 +45,7 @@ export function costApproach(input: CostApproachInput): CostApproach | null {
     `percent good = 1 − ${fmt(ea, 2)}/${life} = ${fmt(percentGood * 100, 1)} %${percentGood === tables.residualPercentGood ? ' (residual floor)' : ''}`,
     `depreciated value = RCN × percent good = ${formatMoney(depreciated)}`,
     `repairs the findings call for = ${formatMoney(money(repairs, tables.currency))}${input.repairTotal.currency !== tables.currency ? ` (repair catalogue in ${input.repairTotal.currency}, not deducted)` : ''}`,
-    `fair market value (FMV) = max(0, depreciated value − repairs) = ${formatMoney(fmv)}`,
+    `fair market value (FMV) = max(residual RCN × ${tables.residualPercentGood} = ${formatMoney(floor)}, depreciated value − repairs) = ${formatMoney(fmv)}${floored ? ' (repairs exceed the depreciated value: a full repair is not economic; residual value applies)' : ''}`,
     `orderly liquidation value (OLV) = FMV × ${tables.orderlyLiquidationRatio} = ${formatMoney(olv)}`,
     `forced liquidation value (FLV) = FMV × ${tables.forcedLiquidationRatio} = ${formatMoney(flv)}`,
   ];
