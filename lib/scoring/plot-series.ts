@@ -1,8 +1,9 @@
+import { roundTo } from './format-number';
 import { lineAt } from './measure/least-squares-line';
 import type { LatheContext } from './lathe/lathe-context';
 import type { CheckResult, PlotSeries, SubsystemResult } from './result';
 
-const round = (n: number, digits = 3) => Number(n.toFixed(digits));
+const round = (n: number, digits = 3) => roundTo(n, digits);
 
 /** Series the report and survey screens plot: bed profile with both reference lines, twist, wear. */
 export function plotSeries(ctx: LatheContext, checks: readonly CheckResult[], subsystems: readonly SubsystemResult[]): PlotSeries {

@@ -17,6 +17,7 @@ import { defaultValuationTables, type ValuationTables } from './valuation/valuat
 import type { ComparableSale } from './valuation/valuation-types';
 import { valueMachine } from './valuation/value-machine';
 import { SCORING_VERSION, SURVEY_FORMAT_VERSION } from './version';
+import { roundTo } from './format-number';
 
 export interface ScoreOptions {
   comparableSales?: readonly ComparableSale[];
@@ -59,10 +60,10 @@ function machineSummary(survey: ParsedLatheSurvey, ctx: LatheContext): MachineSu
     model: m.model ?? null,
     serialNumber: m.serialNumber ?? null,
     year: m.year ?? null,
-    swingOverBedMm: Number(ctx.swingMm.toFixed(2)),
-    distanceBetweenCentresMm: Number(ctx.distanceBetweenCentresMm.toFixed(1)),
-    spindleBoreMm: m.spindleBore ? Number(toMillimetres(m.spindleBore).toFixed(2)) : null,
-    motorPowerKw: ctx.motorKw === null ? null : Number(ctx.motorKw.toFixed(3)),
+    swingOverBedMm: roundTo(ctx.swingMm, 2),
+    distanceBetweenCentresMm: roundTo(ctx.distanceBetweenCentresMm, 1),
+    spindleBoreMm: m.spindleBore ? roundTo(toMillimetres(m.spindleBore), 2) : null,
+    motorPowerKw: ctx.motorKw === null ? null : roundTo(ctx.motorKw, 3),
     sizeClass: ctx.sizeClassLabel,
     inspectedOn: survey.inspectedOn ?? null,
   };

@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import type { CheckResult, ScoringResult } from '../result';
 
 /**
@@ -9,7 +9,7 @@ export function confidenceFrom(checks: readonly CheckResult[]): ScoringResult['c
   const total = checks.reduce((s, c) => s + c.weight, 0);
   const measured = checks.filter((c) => c.status === 'measured');
   const measuredWeight = measured.reduce((s, c) => s + c.weight, 0);
-  const value = total === 0 ? 0 : Number((measuredWeight / total).toFixed(3));
+  const value = total === 0 ? 0 : roundTo((measuredWeight / total), 3);
   const missingChecks = checks
     .filter((c) => c.status === 'not-measured')
     .sort((a, b) => b.weight - a.weight || a.id.localeCompare(b.id));

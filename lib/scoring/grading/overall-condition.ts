@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import type { ScoringResult, SubsystemResult } from '../result';
 import { SUBSYSTEM_TABLE } from '../subsystems';
 import { gradeForScore } from './condition-scale';
@@ -16,7 +16,7 @@ export function overallCondition(subsystems: readonly SubsystemResult[]): Scorin
   const totalWeight = assessed.reduce((s, x) => s + SUBSYSTEM_TABLE[x.id].weight, 0);
   const mean = assessed.reduce((s, x) => s + SUBSYSTEM_TABLE[x.id].weight * x.score!, 0) / totalWeight;
   const worst = assessed.reduce((a, b) => (b.score! < a.score! ? b : a));
-  const score = Number((0.7 * mean + 0.3 * worst.score!).toFixed(2));
+  const score = roundTo((0.7 * mean + 0.3 * worst.score!), 2);
   const condition = gradeForScore(score);
   return {
     score,

@@ -3,6 +3,7 @@ import type { CheckResult } from '../result';
 import { describeSource } from '../source-marks';
 import { bandFor } from './bands';
 import { checkScore } from './check-score';
+import { roundTo } from '../format-number';
 
 /** Run each check module and shape its outcome as a report line with its full working. */
 export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey: S, context: C): CheckResult[] {
@@ -40,10 +41,10 @@ export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey
       status: 'measured',
       measured: outcome.measured,
       permissible: outcome.permissible,
-      q: Number(outcome.q.toFixed(4)),
+      q: roundTo(outcome.q, 4),
       band: band.band,
       bandLabel: band.label,
-      score: Number(checkScore(outcome.q).toFixed(2)),
+      score: roundTo(checkScore(outcome.q), 2),
       weight: check.weight,
       explanation: {
         inputs: outcome.inputs,

@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import type { CheckResult, SubsystemResult } from '../result';
 import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '../subsystems';
 import { gradeForScore } from './condition-scale';
@@ -29,7 +29,7 @@ export function gradeSubsystems(checks: readonly CheckResult[]): SubsystemResult
     const totalWeight = measured.reduce((s, c) => s + c.weight, 0);
     const mean = measured.reduce((s, c) => s + c.weight * c.score!, 0) / totalWeight;
     const worst = measured.reduce((a, b) => (b.score! < a.score! ? b : a));
-    const score = Number((0.5 * mean + 0.5 * worst.score!).toFixed(2));
+    const score = roundTo((0.5 * mean + 0.5 * worst.score!), 2);
     return {
       id,
       label,

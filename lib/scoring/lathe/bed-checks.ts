@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import { BED_STRAIGHTNESS_BY_LENGTH, bedStraightnessLimitMm } from '../limits/lathe-limits';
 import { WEAR_RUBRIC } from '../survey/rubrics';
 import { toMillimetres } from '../units/length';
@@ -18,7 +18,7 @@ export const BED_CHECKS: readonly LatheCheck[] = [
       const profile = ctx.bed.profile;
       if (!profile) return notMeasured(ctx.bed.unusableReason ?? 'no longitudinal level readings entered');
       const base = bedStraightnessLimitMm(ctx.distanceBetweenCentresMm);
-      const value = Number((base * ctx.classFactor).toFixed(6));
+      const value = roundTo((base * ctx.classFactor), 6);
       const straightnessMm = profile.endPoint.straightnessUm / 1000;
       // Sign for the one-sided rule: a convex (middle high) bed is allowed, concave is not.
       const signed = profile.shape === 'concave' ? -straightnessMm : straightnessMm;
@@ -44,8 +44,8 @@ export const BED_CHECKS: readonly LatheCheck[] = [
         wrongDirectionText: 'a bed may be convex but not concave',
         details: {
           shape: profile.shape,
-          endPointStraightnessUm: Number(profile.endPoint.straightnessUm.toFixed(2)),
-          leastSquaresStraightnessUm: Number(profile.leastSquares.straightnessUm.toFixed(2)),
+          endPointStraightnessUm: roundTo(profile.endPoint.straightnessUm, 2),
+          leastSquaresStraightnessUm: roundTo(profile.leastSquares.straightnessUm, 2),
           formulaProfile: 'z_k = Σ r_i · s · L; deviation = max above + |max below| the reference line',
         },
       });

@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import { LATHE_LIMITS } from '../limits/lathe-limits';
 import {
   beltSpanMm,
@@ -37,8 +37,11 @@ export const DRIVE_CHECKS: readonly LatheCheck[] = [
       if (!belt?.measuredDeflection) return notMeasured('deflection not measured');
       const d1 = toMillimetres(belt.driverPulleyDiameter);
       const d2 = toMillimetres(belt.drivenPulleyDiameter);
+      const centreDistanceMm = toMillimetres(belt.centreDistance);
+      // Two pulleys can only sit on centres further apart than the sum of their radii.
+      if (centreDistanceMm <= (d1 + d2) / 2) return notMeasured('centre distance does not exceed the sum of the pulley radii; check the entries');
       const spanMm = beltSpanMm({
-        centreDistanceMm: toMillimetres(belt.centreDistance),
+        centreDistanceMm,
         largePulleyDiameterMm: Math.max(d1, d2),
         smallPulleyDiameterMm: Math.min(d1, d2),
       });
@@ -48,9 +51,9 @@ export const DRIVE_CHECKS: readonly LatheCheck[] = [
       const status = beltTensionStatus(measured, target);
       const q = beltTensionRatio(measured, target);
       return {
-        measured: { value: Number(measured.toFixed(3)), unit: 'mm', text: status },
+        measured: { value: roundTo(measured, 3), unit: 'mm', text: status },
         permissible: {
-          value: Number(target.toFixed(3)),
+          value: roundTo(target, 3),
           unit: 'mm',
           direction: 'both',
           basis: `target t/64 = ${fmt(target, 2)} mm (16 mm/m rule: ${fmt(fenner, 2)} mm), ±30 %`,
@@ -67,9 +70,9 @@ export const DRIVE_CHECKS: readonly LatheCheck[] = [
         formula: `q = |measured/target − 1| / ${LATHE_LIMITS.beltDeflection.value} = |${fmt(measured, 2)}/${fmt(target, 2)} − 1| / 0.3 = ${fmt(q, 3)}`,
         summary: `Belt deflection ${fmt(measured, 1)} mm against a ${fmt(target, 1)} mm target: ${status} (${bandFor(q).label.toLowerCase()}).`,
         details: {
-          spanMm: Number(spanMm.toFixed(2)),
-          targetSixtyFourthMm: Number(target.toFixed(3)),
-          targetSixteenPerMetreMm: Number(fenner.toFixed(3)),
+          spanMm: roundTo(spanMm, 2),
+          targetSixtyFourthMm: roundTo(target, 3),
+          targetSixteenPerMetreMm: roundTo(fenner, 3),
           status,
         },
       };

@@ -1,6 +1,6 @@
 import type { CheckEvaluation, Permissible } from '../check-definition';
 import { deviationRatio } from '../measure/deviation-ratio';
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import { bandFor } from '../grading/bands';
 import { toMillimetres, type Length } from '../units/length';
 
@@ -41,7 +41,7 @@ export function evaluateDeviation(input: DeviationCheckInput): CheckEvaluation {
     ? `${input.what} ${fmt(input.deviation)} ${input.unit} is the wrong way${input.wrongDirectionText ? ` (${input.wrongDirectionText})` : ''}: ${band.label.toLowerCase()}.`
     : `${input.what} ${fmt(input.deviation)} ${input.unit} against ${fmt(p.value)} ${p.unit} permitted: ${band.label.toLowerCase()} (${band.meaning}).`;
   return {
-    measured: { value: Number(input.deviation.toFixed(6)), unit: input.unit },
+    measured: { value: roundTo(input.deviation, 6), unit: input.unit },
     permissible: p,
     q,
     inputs: input.inputs,

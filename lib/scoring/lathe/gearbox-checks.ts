@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import { ratioFromKnots, type RatioKnot } from '../measure/deviation-ratio';
 import { bandFor } from '../grading/bands';
 import { ratioForRating } from '../grading/rubric-ratios';
@@ -54,7 +54,7 @@ export const GEARBOX_CHECKS: readonly LatheCheck[] = [
       });
       const worst = perRange.reduce((a, b) => (b.q > a.q ? b : a));
       return {
-        measured: { value: Number(worst.q.toFixed(4)), unit: 'q of noisiest range', text: worst.range },
+        measured: { value: roundTo(worst.q, 4), unit: 'q of noisiest range', text: worst.range },
         permissible: {
           value: 1,
           unit: 'q of noisiest range',

@@ -2,7 +2,7 @@ import { classFactor, LATHE_LIMITS, swingClass, type LatheLimitId } from '../lim
 import type { Permissible } from '../check-definition';
 import { bedTwist, levelProfile, type LevelProfile, type TwistResult } from '../measure/level-profile';
 import { scaleTolerance } from '../measure/tolerance-scaling';
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import type { ParsedLatheSurvey } from '../survey/lathe-survey';
 import { toMillimetres } from '../units/length';
 import { toMillimetresPerMetre } from '../units/slope';
@@ -107,7 +107,7 @@ export function latheLimit(id: LatheLimitId, ctx: LatheContext, measuringLengthM
     };
   }
   return {
-    value: Number(base.toFixed(6)),
+    value: roundTo(base, 6),
     unit: entry.unit,
     direction: entry.direction,
     basis: `${fmt(entry.value)} ${entry.unit}${overMm !== undefined ? `/${overMm}` : ''}${factorText}`,

@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import { checkViscosityGrade, iso3448Range } from '../measure/iso3448';
 import { formatIso4406, iso4406Code, iso4406Range } from '../measure/iso4406';
 import { LATHE_LIMITS, LATHE_OIL_TARGET } from '../limits/lathe-limits';
@@ -92,7 +92,7 @@ export const LUBRICATION_CHECKS: readonly LatheCheck[] = [
       const q = Math.max(...ratios);
       const target = formatIso4406(LATHE_OIL_TARGET);
       return {
-        measured: { value: Number(q.toFixed(4)), unit: 'multiple of target count', text: formatIso4406(code) },
+        measured: { value: roundTo(q, 4), unit: 'multiple of target count', text: formatIso4406(code) },
         permissible: {
           value: 1,
           unit: 'multiple of target count',

@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import { tailstockAlignmentFromIndicator } from '../measure/tailstock-alignment';
 import { twoCollarTest } from '../measure/two-collar';
 import { WEAR_RUBRIC } from '../survey/rubrics';
@@ -42,7 +42,7 @@ export const TAILSTOCK_CHECKS: readonly LatheCheck[] = [
           `offset = tail − head = ${fmt(result.offsetMm)} mm; move the tailstock ${MOVE_WORDS[result.move]} by ${fmt(result.moveByMm)} mm`,
         ],
         what: `Tailstock offset over ${fmt(distanceMm, 1)} mm`,
-        details: { move: result.move, moveByMm: Number(result.moveByMm.toFixed(4)) },
+        details: { move: result.move, moveByMm: roundTo(result.moveByMm, 4) },
       });
     },
   },
@@ -79,10 +79,10 @@ export const TAILSTOCK_CHECKS: readonly LatheCheck[] = [
         what: `Radial offset over ${fmt(collarDistanceMm, 1)} mm`,
         details: {
           setup: t.setup,
-          radialOffsetMm: Number(r.radialOffsetMm.toFixed(5)),
-          taperMmPerM: Number(r.taperMmPerM.toFixed(5)),
+          radialOffsetMm: roundTo(r.radialOffsetMm, 5),
+          taperMmPerM: roundTo(r.taperMmPerM, 5),
           move: r.tailstockCorrection?.move ?? null,
-          moveByMm: r.tailstockCorrection ? Number(r.tailstockCorrection.byMm.toFixed(5)) : null,
+          moveByMm: r.tailstockCorrection ? roundTo(r.tailstockCorrection.byMm, 5) : null,
         },
       });
     },

@@ -1,3 +1,5 @@
+import { roundTo } from '../format-number';
+
 /**
  * Proportional rule for a tolerance stated over one measuring length and applied over another:
  * scale in proportion to the length, round to a step, never go below a minimum
@@ -29,7 +31,7 @@ export interface ScaledTolerance {
 /** Round to the nearest step; the tiny bias removes binary noise such as 6.9999999 steps. */
 function roundToStep(value: number, step: number): number {
   const steps = Math.round(value / step + 1e-9);
-  return Number((steps * step).toFixed(6));
+  return roundTo((steps * step), 6);
 }
 
 export function scaleTolerance(

@@ -1,3 +1,4 @@
+import { fmt } from '../format-number';
 import type { TailstockMove } from './tailstock-alignment';
 
 /**
@@ -46,6 +47,3 @@ export function twoCollarTest(input: TwoCollarInput): TwoCollarResult {
   return { diameterDifferenceMm, radialOffsetMm, taperMmPerM, tailstockCorrection: { move, byMm, basis } };
 }
 
-function fmt(n: number): string {
-  return String(Number(n.toFixed(4)));
-}

@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import type { ConditionGrade } from '../grading/condition-scale';
 import { formatMoney, money, multiplyMoney, type Money } from '../money';
 import { effectiveAge, percentGoodByAgeLife } from './age-life';
@@ -54,8 +54,8 @@ export function costApproach(input: CostApproachInput): CostApproach | null {
     replacementCostBasis: rcn.basis,
     normalUsefulLifeYears: life,
     actualAgeYears: input.actualAgeYears,
-    effectiveAgeYears: Number(ea.toFixed(3)),
-    percentGood: Number(percentGood.toFixed(4)),
+    effectiveAgeYears: roundTo(ea, 3),
+    percentGood: roundTo(percentGood, 4),
     depreciatedValue: depreciated,
     repairDeduction: money(repairs, tables.currency),
     fairMarketValue: fmv,

@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import { formatMoney, money, multiplyMoney } from '../money';
 import type { ValuationTables } from './valuation-tables';
 import type { CostApproach, Reconciliation, SalesComparison } from './valuation-types';
@@ -34,7 +34,7 @@ export function reconcile(
     `OLV = FMV × ${tables.orderlyLiquidationRatio} = ${formatMoney(olv)}; FLV = FMV × ${tables.forcedLiquidationRatio} = ${formatMoney(flv)}`,
   ];
   return {
-    weights: { costApproach: Number(wc.toFixed(3)), salesComparison: Number(ws.toFixed(3)) },
+    weights: { costApproach: roundTo(wc, 3), salesComparison: roundTo(ws, 3) },
     fairMarketValue: fmv,
     orderlyLiquidationValue: olv,
     forcedLiquidationValue: flv,

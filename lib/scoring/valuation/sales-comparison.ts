@@ -1,4 +1,4 @@
-import { fmt } from '../format-number';
+import { fmt, roundTo } from '../format-number';
 import type { ConditionGrade } from '../grading/condition-scale';
 import { formatMoney, money, multiplyMoney } from '../money';
 import { median } from './median';
@@ -30,7 +30,7 @@ export function salesComparison(
     return {
       description: c.description ?? `comparable ${i + 1}`,
       price: c.price,
-      adjustment: Number(adjustment.toFixed(4)),
+      adjustment: roundTo(adjustment, 4),
       adjusted: multiplyMoney(c.price, adjustment),
     };
   });
