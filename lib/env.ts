@@ -17,6 +17,8 @@ const envSchema = z.object({
   STRIPE_API_URL: optionalUrl,
   SMTP_URL: z.string().regex(/^smtps?:\/\//, 'must be an smtp:// or smtps:// URL').optional(),
   MAIL_FROM: z.string().default('Waygrade <reports@waygrade.example>'),
+  // How often each app server drains the e-mail outbox; 0 turns the worker off on this server.
+  MAIL_WORKER_INTERVAL_MS: z.coerce.number().int().min(0).max(600_000).default(3_000),
   UPLOADTHING_TOKEN: z.string().optional(),
   UPLOADS_PUBLIC_URL: optionalUrl,
 });

@@ -1,0 +1,7 @@
+// Runs once when an app server starts. The e-mail outbox worker lives in the Node.js runtime only;
+// NEXT_RUNTIME is a constant Next.js inlines at build time, not configuration, so it is read here.
+export async function register() {
+  if (process.env.NEXT_RUNTIME !== 'nodejs') return;
+  const { startOutboxWorker } = await import('@/lib/mail/worker');
+  startOutboxWorker();
+}
