@@ -1,21 +1,9 @@
 import 'server-only';
-import { headers } from 'next/headers';
 import { NextResponse, type NextRequest } from 'next/server';
 import type { z } from 'zod';
 import { httpStatus } from '@/lib/errors';
-import { auth } from './config';
-import type { Actor, Operation, OperationResult } from './operation';
-
-async function currentActor(): Promise<Actor | null> {
-  const session = await auth();
-  const user = session?.user;
-  return user?.id ? { id: user.id, role: user.role, name: user.name, email: user.email } : null;
-}
-
-async function clientIp(): Promise<string | null> {
-  const list = await headers();
-  return list.get('x-forwarded-for')?.split(',')[0]?.trim() ?? list.get('x-real-ip') ?? null;
-}
+import { currentActor, currentClientIp as clientIp } from './current-actor';
+import type { Operation, OperationResult } from './operation';
 
 /** Runs an operation for the signed-in user of the current request (for server actions). */
 export async function runAsCurrentUser<S extends z.ZodType, T>(operation: Operation<S, T>, raw: unknown): Promise<OperationResult<T>> {

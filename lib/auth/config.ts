@@ -1,20 +1,19 @@
 import NextAuth, { CredentialsSignin, type NextAuthConfig } from 'next-auth';
 import Credentials from 'next-auth/providers/credentials';
 import { eq } from 'drizzle-orm';
-import { z } from 'zod';
 import { db } from '@/db/client';
 import { users } from '@/db/schema';
 import { env } from '@/lib/env';
 import type { Role } from '@/lib/roles';
-import { verifyPassword } from './password';
+import { authenticate, type SignInRefusal } from './credentials';
+import { clientIpFrom } from './client-ip';
 
-const credentialsSchema = z.object({
-  email: z.string().trim().toLowerCase().pipe(z.email()),
-  password: z.string().min(1).max(200),
-});
-
-class InvalidCredentials extends CredentialsSignin {
-  code = 'invalid_credentials';
+/** Carries why sign-in was refused to the sign-in action, which words it for the person. */
+class SignInRefused extends CredentialsSignin {
+  constructor(reason: SignInRefusal) {
+    super();
+    this.code = reason;
+  }
 }
 
 async function findActiveUser(id: string) {
@@ -29,18 +28,17 @@ async function findActiveUser(id: string) {
 const config = (): NextAuthConfig => ({
   secret: env().AUTH_SECRET,
   trustHost: true,
+  // __Secure- cookies need HTTPS; a local http:// address keeps plain names so it still works.
+  useSecureCookies: env().NODE_ENV === 'production' && env().APP_URL.startsWith('https:'),
   session: { strategy: 'jwt', maxAge: 60 * 60 * 12 },
   pages: { signIn: '/sign-in' },
   providers: [
     Credentials({
       credentials: { email: { label: 'E-mail' }, password: { label: 'Password', type: 'password' } },
-      async authorize(raw) {
-        const parsed = credentialsSchema.safeParse(raw);
-        if (!parsed.success) throw new InvalidCredentials();
-        const [user] = await db.select().from(users).where(eq(users.email, parsed.data.email)).limit(1);
-        const ok = await verifyPassword(parsed.data.password, user?.passwordHash);
-        if (!user || !ok || user.deactivatedAt) throw new InvalidCredentials();
-        return { id: user.id, name: user.name, email: user.email, role: user.role, sessionVersion: user.sessionVersion };
+      async authorize(raw, request) {
+        const result = await authenticate(raw, { ip: clientIpFrom(request.headers) });
+        if (!result.ok) throw new SignInRefused(result.reason);
+        return result.user;
       },
     }),
   ],

@@ -1,0 +1,33 @@
+import 'server-only';
+import { eq } from 'drizzle-orm';
+import { users } from '@/db/schema';
+import { defineOperation } from '@/lib/auth/operation';
+import { TOKEN_LIFETIME_MS, issueToken } from '@/lib/auth/one-time-tokens';
+import { isRateLimited, recordAttempt, subjectsFor } from '@/lib/auth/rate-limit';
+import { AppError } from '@/lib/errors';
+import { appLink } from '@/lib/mail/links';
+import { enqueueEmail } from '@/lib/mail/outbox';
+import { emailRequestSchema } from '@/lib/validation/email-request';
+
+/** A fresh confirmation link; answers the same whether or not the address has an unconfirmed account. */
+export const resendConfirmation = defineOperation({
+  name: 'account.resend-confirmation',
+  entityType: 'user',
+  access: 'public',
+  input: emailRequestSchema,
+  async run({ input, ip, tx }) {
+    const subjects = subjectsFor('reset', input.email, ip);
+    if (await isRateLimited(subjects)) throw new AppError('rate_limited');
+    // Counted outside the transaction so that refused requests count too.
+    await recordAttempt(subjects);
+    const [user] = await tx.select().from(users).where(eq(users.email, input.email)).limit(1);
+    if (!user || user.emailVerified || user.deactivatedAt || !user.passwordHash) return { data: { email: input.email }, entityId: user?.id, detail: { sent: false } };
+    const token = await issueToken(tx, user.id, 'verify_email');
+    await enqueueEmail(tx, {
+      to: user.email,
+      template: 'verify-email',
+      data: { name: user.name, url: appLink('/confirm-email', { token }), expiresInHours: TOKEN_LIFETIME_MS.verify_email / 3_600_000 },
+    });
+    return { data: { email: input.email }, entityId: user.id, detail: { sent: true } };
+  },
+});
