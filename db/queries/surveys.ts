@@ -1,0 +1,96 @@
+import 'server-only';
+import { and, eq, isNull, sql } from 'drizzle-orm';
+import { inspections, inspectionStatusEvents, machines, surveys } from '@/db/schema';
+import type { InspectionStatus } from '@/db/schema/inspections';
+import type { Database } from '@/db/client';
+
+type Reader = Pick<Database, 'select'>;
+type Writer = Pick<Database, 'select' | 'insert' | 'update'>;
+
+/** The inspection with the facts of its machine the survey starts from; `lock` holds the row until commit. */
+export async function findInspectionWithMachine(reader: Reader, inspectionId: number, options: { lock?: boolean } = {}) {
+  const query = reader
+    .select({
+      id: inspections.id,
+      status: inspections.status,
+      inspectorId: inspections.inspectorId,
+      scheduledAt: inspections.scheduledAt,
+      siteAccessNotes: inspections.siteAccessNotes,
+      siteContactName: inspections.siteContactName,
+      siteContactPhone: inspections.siteContactPhone,
+      machineId: machines.id,
+      latheKind: machines.latheKind,
+      maker: machines.maker,
+      model: machines.model,
+      serialNumber: machines.serialNumber,
+      yearBuilt: machines.yearBuilt,
+      swingMm: machines.swingMm,
+      betweenCentresMm: machines.betweenCentresMm,
+      spindleBoreMm: machines.spindleBoreMm,
+      motorKw: machines.motorKw,
+      supplyVoltage: machines.supplyVoltage,
+      supplyPhases: machines.supplyPhases,
+      town: machines.town,
+      region: machines.region,
+    })
+    .from(inspections)
+    .innerJoin(machines, eq(machines.id, inspections.machineId))
+    .where(eq(inspections.id, inspectionId));
+  const [row] = options.lock ? await query.for('update') : await query;
+  return row ?? null;
+}
+
+export async function isInspectionAssignedTo(reader: Reader, inspectionId: number, inspectorId: string) {
+  const [row] = await reader
+    .select({ id: inspections.id })
+    .from(inspections)
+    .where(and(eq(inspections.id, inspectionId), eq(inspections.inspectorId, inspectorId)));
+  return Boolean(row);
+}
+
+export async function findSurvey(reader: Reader, inspectionId: number) {
+  const [row] = await reader.select().from(surveys).where(eq(surveys.inspectionId, inspectionId));
+  return row ?? null;
+}
+
+export async function insertSurvey(writer: Writer, input: { inspectionId: number; formatVersion: number; data: unknown; userId: string }) {
+  await writer.insert(surveys).values({
+    inspectionId: input.inspectionId,
+    formatVersion: input.formatVersion,
+    version: 1,
+    data: input.data,
+    updatedById: input.userId,
+  });
+}
+
+/**
+ * Stores the whole survey only if nobody saved since `baseVersion` and it is not yet submitted.
+ * One conditional UPDATE, so two devices saving at the same moment cannot both win.
+ * Returns the new version, or null when the condition failed.
+ */
+export async function updateSurveyIfCurrent(writer: Writer, input: { inspectionId: number; baseVersion: number; data: unknown; userId: string }) {
+  const [result] = await writer
+    .update(surveys)
+    .set({ data: input.data, version: sql`${surveys.version} + 1`, updatedById: input.userId })
+    .where(and(eq(surveys.inspectionId, input.inspectionId), eq(surveys.version, input.baseVersion), isNull(surveys.submittedAt)));
+  return result.affectedRows === 1 ? input.baseVersion + 1 : null;
+}
+
+export async function markSurveySubmitted(writer: Writer, inspectionId: number, at: Date) {
+  await writer.update(surveys).set({ submittedAt: at }).where(eq(surveys.inspectionId, inspectionId));
+}
+
+/** Moves an inspection on and records the step on its timeline. */
+export async function moveInspectionStatus(
+  writer: Writer,
+  input: { inspectionId: number; from: InspectionStatus; to: InspectionStatus; actorId: string; note?: string },
+) {
+  await writer.update(inspections).set({ status: input.to }).where(eq(inspections.id, input.inspectionId));
+  await writer.insert(inspectionStatusEvents).values({
+    inspectionId: input.inspectionId,
+    fromStatus: input.from,
+    toStatus: input.to,
+    actorId: input.actorId,
+    note: input.note ?? null,
+  });
+}
