@@ -1,0 +1,72 @@
+import 'server-only';
+import sharp from 'sharp';
+
+/**
+ * Survey photos as stored: each upload is decoded (which is how a renamed non-image is caught —
+ * by its content, never by its name or declared type), turned upright from the camera's
+ * orientation tag, stripped of all metadata (EXIF, GPS location, maker notes, XMP) and written in
+ * three sizes. Phones put the site's location in every photo; a report sold to strangers must not.
+ */
+export const PHOTO_VARIANTS = {
+  // Evidence copy: full detail for a later dispute, capped at a size any screen or print needs.
+  full: { longEdgePx: 4096, format: 'jpeg', quality: 90 },
+  display: { longEdgePx: 1600, format: 'jpeg', quality: 82 },
+  thumb: { longEdgePx: 320, format: 'webp', quality: 75 },
+} as const;
+export type PhotoVariant = keyof typeof PHOTO_VARIANTS;
+
+// Formats a phone or camera produces and libvips decodes; anything else is refused.
+const ACCEPTED_FORMATS = new Set(['jpeg', 'png', 'webp', 'heif', 'avif', 'tiff']);
+// A 50-megapixel limit keeps a decompression bomb from exhausting the server.
+const MAX_INPUT_PIXELS = 50_000_000;
+
+export class NotAPhotoError extends Error {
+  constructor(message = 'This file is not a photo Waygrade can read. Take the photo again or choose a JPEG, PNG, WebP or HEIF image.') {
+    super(message);
+    this.name = 'NotAPhotoError';
+  }
+}
+
+export interface ProcessedVariant {
+  bytes: Buffer;
+  contentType: string;
+  extension: string;
+  widthPx: number;
+  heightPx: number;
+}
+
+export type ProcessedPhoto = Record<PhotoVariant, ProcessedVariant>;
+
+async function render(input: Uint8Array, variant: PhotoVariant): Promise<ProcessedVariant> {
+  const spec = PHOTO_VARIANTS[variant];
+  // rotate() with no angle applies the EXIF orientation; sharp writes no metadata unless asked.
+  const pipeline = sharp(input, { failOn: 'error', limitInputPixels: MAX_INPUT_PIXELS })
+    .rotate()
+    .resize({ width: spec.longEdgePx, height: spec.longEdgePx, fit: 'inside', withoutEnlargement: true });
+  const encoded = spec.format === 'jpeg' ? pipeline.jpeg({ quality: spec.quality, mozjpeg: true }) : pipeline.webp({ quality: spec.quality });
+  const { data, info } = await encoded.toBuffer({ resolveWithObject: true });
+  return {
+    bytes: data,
+    contentType: spec.format === 'jpeg' ? 'image/jpeg' : 'image/webp',
+    extension: spec.format === 'jpeg' ? 'jpg' : 'webp',
+    widthPx: info.width,
+    heightPx: info.height,
+  };
+}
+
+export async function processPhoto(input: Uint8Array): Promise<ProcessedPhoto> {
+  let format: string | undefined;
+  try {
+    format = (await sharp(input, { failOn: 'error', limitInputPixels: MAX_INPUT_PIXELS }).metadata()).format;
+  } catch {
+    throw new NotAPhotoError();
+  }
+  if (!format || !ACCEPTED_FORMATS.has(format)) throw new NotAPhotoError();
+  try {
+    const [full, display, thumb] = await Promise.all([render(input, 'full'), render(input, 'display'), render(input, 'thumb')]);
+    return { full, display, thumb };
+  } catch {
+    // The header looked like an image but the pixels do not decode: a damaged or disguised file.
+    throw new NotAPhotoError();
+  }
+}
