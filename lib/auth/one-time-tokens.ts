@@ -1,7 +1,7 @@
 import 'server-only';
 import { createHash, randomBytes } from 'node:crypto';
 import { and, eq, gt, isNull } from 'drizzle-orm';
-import { db, type Database } from '@/db/client';
+import type { Database } from '@/db/client';
 import { userTokens, USER_TOKEN_PURPOSES } from '@/db/schema';
 
 export type TokenPurpose = (typeof USER_TOKEN_PURPOSES)[number];
@@ -16,7 +16,7 @@ export const TOKEN_LIFETIME_MS: Record<TokenPurpose, number> = {
 type Writer = Pick<Database, 'insert' | 'update'>;
 
 // Only the SHA-256 is stored: a copy of the table cannot be turned into working links.
-function hashOf(token: string) {
+export function hashToken(token: string) {
   return createHash('sha256').update(token).digest('hex');
 }
 
@@ -27,7 +27,7 @@ export async function issueToken(writer: Writer, userId: string, purpose: TokenP
     .update(userTokens)
     .set({ usedAt: now })
     .where(and(eq(userTokens.userId, userId), eq(userTokens.purpose, purpose), isNull(userTokens.usedAt)));
-  await writer.insert(userTokens).values({ userId, purpose, tokenHash: hashOf(token), expiresAt: new Date(now.getTime() + TOKEN_LIFETIME_MS[purpose]) });
+  await writer.insert(userTokens).values({ userId, purpose, tokenHash: hashToken(token), expiresAt: new Date(now.getTime() + TOKEN_LIFETIME_MS[purpose]) });
   return token;
 }
 
@@ -36,7 +36,7 @@ export async function issueToken(writer: Writer, userId: string, purpose: TokenP
  * Returns the user it belongs to, or null when it is unknown, used or expired.
  */
 export async function consumeToken(writer: Pick<Database, 'update' | 'select'>, token: string, purpose: TokenPurpose, now = new Date()) {
-  const hash = hashOf(token);
+  const hash = hashToken(token);
   const [result] = await writer
     .update(userTokens)
     .set({ usedAt: now })
@@ -44,14 +44,4 @@ export async function consumeToken(writer: Pick<Database, 'update' | 'select'>, 
   if (result.affectedRows !== 1) return null;
   const [row] = await writer.select({ userId: userTokens.userId }).from(userTokens).where(eq(userTokens.tokenHash, hash)).limit(1);
   return row?.userId ?? null;
-}
-
-/** Whether a link still works, for pages that show a form only when it does. */
-export async function isTokenUsable(token: string, purpose: TokenPurpose, now = new Date()) {
-  const [row] = await db
-    .select({ id: userTokens.id })
-    .from(userTokens)
-    .where(and(eq(userTokens.tokenHash, hashOf(token)), eq(userTokens.purpose, purpose), isNull(userTokens.usedAt), gt(userTokens.expiresAt, now)))
-    .limit(1);
-  return Boolean(row);
 }

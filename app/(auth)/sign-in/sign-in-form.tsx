@@ -1,6 +1,8 @@
 'use client';
 
 import { useActionState } from 'react';
+import Link from 'next/link';
+import { FormAlert } from '@/components/forms/form-alert';
 import { Button } from '@/components/ui/button';
 import { signInAction, type SignInState } from './actions';
 
@@ -20,9 +22,17 @@ export function SignInForm({ callbackUrl }: { callbackUrl?: string }) {
         <input name="password" type="password" autoComplete="current-password" required className={FIELD} />
       </label>
       {state.message ? (
-        <p role="alert" className="rounded-lg border border-band-rebuild/40 bg-band-rebuild/5 px-3 py-2 text-band-rebuild">
+        <FormAlert tone="error">
           {state.message}
-        </p>
+          {state.unconfirmed ? (
+            <>
+              {' '}
+              <Link href="/confirm-email" className="font-semibold underline underline-offset-4">
+                Send the link again
+              </Link>
+            </>
+          ) : null}
+        </FormAlert>
       ) : null}
       <Button type="submit" disabled={pending} className="w-full">
         {pending ? 'Signing in…' : 'Sign in'}
