@@ -21,12 +21,15 @@ export function sumMoney(items: readonly Money[], currency: string): Money {
   return { amountMinor: items.reduce((s, m) => s + m.amountMinor, 0), currency };
 }
 
-/** "€12,500.00"-style text in a fixed locale, so reports read the same wherever they are run. */
+/**
+ * "EUR 12,500.00"-style text, formatted by hand rather than through Intl: the same on every
+ * runtime and locale, and fast enough to call for every line of a report.
+ */
 export function formatMoney(m: Money, minorDigits = 2): string {
-  const major = m.amountMinor / 10 ** minorDigits;
-  const text = Math.abs(major).toLocaleString('en-GB', {
-    minimumFractionDigits: minorDigits,
-    maximumFractionDigits: minorDigits,
-  });
-  return `${major < 0 ? '−' : ''}${m.currency} ${text}`;
+  const negative = m.amountMinor < 0;
+  const digits = String(Math.abs(Math.round(m.amountMinor))).padStart(minorDigits + 1, '0');
+  const whole = digits.slice(0, digits.length - minorDigits);
+  const fraction = digits.slice(digits.length - minorDigits);
+  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+  return `${negative ? '−' : ''}${m.currency} ${grouped}${minorDigits ? `.${fraction}` : ''}`;
 }

@@ -8,6 +8,11 @@ import type { DeviceState, OilLevel, Rubric } from '../survey/rubrics';
 
 const RUBRIC_SOURCE = practice('Waygrade rating rubric');
 
+// Table texts for the formulas, built once.
+const RATING_TABLE_TEXT = RATING_RATIOS.map((r, i) => `${i}→${r}`).join(', ');
+const DEVICE_TABLE_TEXT = Object.entries(DEVICE_STATE_RATIOS).map(([k, v]) => `${k}→${v}`).join(', ');
+const OIL_LEVEL_TABLE_TEXT = Object.entries(OIL_LEVEL_RATIOS).map(([k, v]) => `${k}→${v}`).join(', ');
+
 export function evaluateRating(rating: number, rubric: Rubric, what: string): CheckEvaluation {
   const level = rubric.levels.find((l) => l.rating === rating);
   const q = ratioForRating(rating);
@@ -22,7 +27,7 @@ export function evaluateRating(rating: number, rubric: Rubric, what: string): Ch
     },
     q,
     inputs: [`${what}: rated ${rating} (${level?.meaning ?? 'no description'})`],
-    formula: `rating → q by table ${RATING_RATIOS.map((r, i) => `${i}→${r}`).join(', ')}: q = ${q}`,
+    formula: `rating → q by table ${RATING_TABLE_TEXT}: q = ${q}`,
     summary: `${what} rated ${rating} (${level?.label ?? ''}): ${bandFor(q).label.toLowerCase()}.`,
   };
 }
@@ -40,7 +45,7 @@ export function evaluateDeviceState(state: DeviceState, what: string, safetyFind
     permissible: { value: 1, unit: 'works (1) / not (0)', direction: 'both', basis: 'must work', source: RUBRIC_SOURCE },
     q,
     inputs: [`${what}: ${DEVICE_WORDS[state]}`],
-    formula: `state → q by table ${Object.entries(DEVICE_STATE_RATIOS).map(([k, v]) => `${k}→${v}`).join(', ')}: q = ${q}`,
+    formula: `state → q by table ${DEVICE_TABLE_TEXT}: q = ${q}`,
     summary: `${what} ${DEVICE_WORDS[state]}: ${bandFor(q).label.toLowerCase()}.`,
     ...(safetyFinding && state !== 'works' ? { safetyFinding: `${what} ${DEVICE_WORDS[state]}: ${safetyFinding}` } : {}),
   };
@@ -53,7 +58,7 @@ export function evaluateOilLevel(level: OilLevel, what: string): CheckEvaluation
     permissible: { value: 1, unit: 'correct (1) / not (0)', direction: 'both', basis: 'level between the marks', source: RUBRIC_SOURCE },
     q,
     inputs: [`${what}: ${level}`],
-    formula: `level → q by table ${Object.entries(OIL_LEVEL_RATIOS).map(([k, v]) => `${k}→${v}`).join(', ')}: q = ${q}`,
+    formula: `level → q by table ${OIL_LEVEL_TABLE_TEXT}: q = ${q}`,
     summary: `${what} ${level}: ${bandFor(q).label.toLowerCase()}.`,
   };
 }

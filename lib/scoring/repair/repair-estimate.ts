@@ -1,7 +1,7 @@
 import { bandRank } from '../grading/bands';
 import { money, type Money } from '../money';
 import type { CheckResult } from '../result';
-import type { RepairCostCatalogue } from './cost-catalogue';
+import type { RepairAction, RepairCostCatalogue, RepairRule } from './cost-catalogue';
 
 export interface RepairLine {
   actionId: string;
@@ -17,15 +17,35 @@ export interface RepairEstimate {
   explanation: string;
 }
 
+interface CatalogueIndex {
+  rulesByCheck: Map<string, RepairRule[]>;
+  actionsById: Map<string, RepairAction>;
+}
+
+/** Catalogues are plain data looked up on every scoring; index each one once. */
+const INDEXES = new WeakMap<RepairCostCatalogue, CatalogueIndex>();
+
+function indexOf(catalogue: RepairCostCatalogue): CatalogueIndex {
+  let index = INDEXES.get(catalogue);
+  if (!index) {
+    const rulesByCheck = new Map<string, RepairRule[]>();
+    for (const rule of catalogue.rules) rulesByCheck.set(rule.checkId, [...(rulesByCheck.get(rule.checkId) ?? []), rule]);
+    index = { rulesByCheck, actionsById: new Map(catalogue.actions.map((a) => [a.id, a])) };
+    INDEXES.set(catalogue, index);
+  }
+  return index;
+}
+
 /**
  * Map each measured check to the most severe repair its band reaches in the catalogue, merge
  * checks calling for the same action, drop actions superseded by a heavier one, and total.
  */
 export function estimateRepairs(checks: readonly CheckResult[], catalogue: RepairCostCatalogue): RepairEstimate {
+  const { rulesByCheck, actionsById } = indexOf(catalogue);
   const triggered = new Map<string, string[]>();
   for (const check of checks) {
     if (check.status !== 'measured' || check.band === null) continue;
-    const reached = catalogue.rules.filter((r) => r.checkId === check.id && bandRank(check.band!) >= bandRank(r.fromBand));
+    const reached = (rulesByCheck.get(check.id) ?? []).filter((r) => bandRank(check.band!) >= bandRank(r.fromBand));
     if (!reached.length) continue;
     const mostSevere = Math.max(...reached.map((r) => bandRank(r.fromBand)));
     for (const rule of reached.filter((r) => bandRank(r.fromBand) === mostSevere)) {
@@ -34,7 +54,7 @@ export function estimateRepairs(checks: readonly CheckResult[], catalogue: Repai
   }
   const superseded = new Set<string>();
   for (const actionId of triggered.keys()) {
-    for (const s of catalogue.actions.find((a) => a.id === actionId)?.supersedes ?? []) superseded.add(s);
+    for (const s of actionsById.get(actionId)?.supersedes ?? []) superseded.add(s);
   }
   const lines: RepairLine[] = catalogue.actions
     .filter((a) => triggered.has(a.id) && !superseded.has(a.id))

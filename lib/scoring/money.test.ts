@@ -1,0 +1,26 @@
+import { describe, expect, it } from 'vitest';
+import { formatMoney, multiplyMoney } from './money';
+
+describe('money', () => {
+  it.each([
+    [0, 'EUR 0.00'],
+    [5, 'EUR 0.05'],
+    [123456, 'EUR 1,234.56'],
+    [100_000_000, 'EUR 1,000,000.00'],
+    [-2500, '−EUR 25.00'],
+  ])('formats %s minor units as %s', (minor, text) => {
+    expect(formatMoney({ amountMinor: minor, currency: 'EUR' })).toBe(text);
+  });
+
+  it('agrees with Intl grouping for en-GB', () => {
+    for (const minor of [1, 999, 100_000, 12_345_678, 987_654_321_00]) {
+      const intl = (minor / 100).toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
+      expect(formatMoney({ amountMinor: minor, currency: 'EUR' })).toBe(`EUR ${intl}`);
+    }
+  });
+
+  it('rounds a product half away from zero to whole minor units', () => {
+    expect(multiplyMoney({ amountMinor: 5, currency: 'EUR' }, 0.5).amountMinor).toBe(3);
+    expect(multiplyMoney({ amountMinor: -5, currency: 'EUR' }, 0.5).amountMinor).toBe(-3);
+  });
+});
