@@ -1,0 +1,132 @@
+import 'server-only';
+import { and, desc, eq, inArray, isNull } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/mysql-core';
+import { db } from '@/db/client';
+import { machines, orders, reportAccessGrants, reports, users, ORDER_STATUSES } from '@/db/schema';
+import type { Database } from '@/db/client';
+
+type Reader = Pick<Database, 'select'>;
+
+/** A buyer's orders, newest first, whatever their state, so a pending or refunded one is explained. */
+export async function listBuyerOrders(buyerId: string) {
+  return db
+    .select({
+      id: orders.id,
+      status: orders.status,
+      amountMinor: orders.amountMinor,
+      currency: orders.currency,
+      createdAt: orders.createdAt,
+      paidAt: orders.paidAt,
+      refundedAt: orders.refundedAt,
+      refundReason: orders.refundReason,
+      providerCheckoutSessionId: orders.providerCheckoutSessionId,
+      reportId: reports.id,
+      version: reports.version,
+      maker: machines.maker,
+      model: machines.model,
+      serialNumber: machines.serialNumber,
+    })
+    .from(orders)
+    .innerJoin(reports, eq(reports.id, orders.reportId))
+    .innerJoin(machines, eq(machines.id, reports.machineId))
+    .where(eq(orders.buyerId, buyerId))
+    .orderBy(desc(orders.createdAt), desc(orders.id));
+}
+
+const newest = alias(reports, 'newest');
+
+/**
+ * Reports this person may download: every released version of each inspection they hold an
+ * unrevoked grant for, so a correction released after the purchase is there too.
+ */
+export async function listDownloadableReports(userId: string) {
+  const granted = await db
+    .select({ inspectionId: reports.inspectionId, reason: reportAccessGrants.reason, grantedAt: reportAccessGrants.grantedAt })
+    .from(reportAccessGrants)
+    .innerJoin(reports, eq(reports.id, reportAccessGrants.reportId))
+    .where(and(eq(reportAccessGrants.userId, userId), isNull(reportAccessGrants.revokedAt)));
+  if (granted.length === 0) return [];
+  const byInspection = new Map(granted.map((g) => [g.inspectionId, g]));
+  const rows = await db
+    .select({
+      reportId: newest.id,
+      inspectionId: newest.inspectionId,
+      version: newest.version,
+      status: newest.status,
+      overallCondition: newest.overallCondition,
+      releasedAt: newest.releasedAt,
+      supersededById: newest.supersededById,
+      maker: machines.maker,
+      model: machines.model,
+      serialNumber: machines.serialNumber,
+      town: machines.town,
+    })
+    .from(newest)
+    .innerJoin(machines, eq(machines.id, newest.machineId))
+    .where(and(inArray(newest.inspectionId, [...byInspection.keys()]), inArray(newest.status, ['released', 'withdrawn'])))
+    .orderBy(desc(newest.releasedAt), desc(newest.version));
+  return rows.map((row) => ({ ...row, reason: byInspection.get(row.inspectionId)!.reason, grantedAt: byInspection.get(row.inspectionId)!.grantedAt }));
+}
+
+export type OrderStatus = (typeof ORDER_STATUSES)[number];
+
+/** Orders for the coordinator, newest first, optionally of one status. */
+export async function listOrdersForAdmin(filter: { status?: OrderStatus; limit?: number } = {}) {
+  return db
+    .select({
+      id: orders.id,
+      status: orders.status,
+      amountMinor: orders.amountMinor,
+      currency: orders.currency,
+      createdAt: orders.createdAt,
+      paidAt: orders.paidAt,
+      refundedAt: orders.refundedAt,
+      refundReason: orders.refundReason,
+      reportId: reports.id,
+      version: reports.version,
+      reportStatus: reports.status,
+      maker: machines.maker,
+      model: machines.model,
+      buyerName: users.name,
+      buyerEmail: users.email,
+    })
+    .from(orders)
+    .innerJoin(reports, eq(reports.id, orders.reportId))
+    .innerJoin(machines, eq(machines.id, reports.machineId))
+    .innerJoin(users, eq(users.id, orders.buyerId))
+    .where(filter.status ? eq(orders.status, filter.status) : undefined)
+    .orderBy(desc(orders.createdAt), desc(orders.id))
+    .limit(filter.limit ?? 200);
+}
+
+/**
+ * One order with everything a payment change needs (buyer, report, machine), locked for update
+ * when read inside a transaction, so two deliveries of related events cannot interleave.
+ */
+export async function lockOrderWithContext(tx: Reader, orderId: number) {
+  // Only the order row is locked; the joined rows are read as they are.
+  const [locked] = await tx.select({ id: orders.id }).from(orders).where(eq(orders.id, orderId)).for('update');
+  if (!locked) return null;
+  const [row] = await tx
+    .select({
+      order: orders,
+      buyer: { id: users.id, name: users.name, email: users.email },
+      report: { id: reports.id, status: reports.status, version: reports.version, verificationCode: reports.verificationCode, inspectionId: reports.inspectionId },
+      machine: { maker: machines.maker, model: machines.model, serialNumber: machines.serialNumber },
+    })
+    .from(orders)
+    .innerJoin(users, eq(users.id, orders.buyerId))
+    .innerJoin(reports, eq(reports.id, orders.reportId))
+    .innerJoin(machines, eq(machines.id, reports.machineId))
+    .where(eq(orders.id, orderId))
+    .limit(1);
+  return row ?? null;
+}
+
+export type OrderWithContext = NonNullable<Awaited<ReturnType<typeof lockOrderWithContext>>>;
+
+/** The order a provider payment belongs to, when the payment has already been recorded on it. */
+export async function findOrderIdByPaymentIntent(tx: Reader, paymentIntentId: string) {
+  const [row] = await tx.select({ id: orders.id }).from(orders).where(eq(orders.providerPaymentIntentId, paymentIntentId)).limit(1);
+  return row?.id ?? null;
+}

@@ -1,0 +1,24 @@
+import 'server-only';
+import { and, eq, isNull } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/mysql-core';
+import { reportAccessGrants, reports } from '@/db/schema';
+import type { Database } from '@/db/client';
+
+type Reader = Pick<Database, 'select'>;
+
+const grantedReport = alias(reports, 'granted_report');
+
+/**
+ * May this person download this report? Yes with an unrevoked grant for it or for another version
+ * of the same inspection: a buyer who paid keeps every later correction, as the receipt promises.
+ */
+export async function hasReportAccess(reader: Reader, userId: string, reportId: number): Promise<boolean> {
+  const [row] = await reader
+    .select({ id: reportAccessGrants.id })
+    .from(reports)
+    .innerJoin(grantedReport, eq(grantedReport.inspectionId, reports.inspectionId))
+    .innerJoin(reportAccessGrants, eq(reportAccessGrants.reportId, grantedReport.id))
+    .where(and(eq(reports.id, reportId), eq(reportAccessGrants.userId, userId), isNull(reportAccessGrants.revokedAt)))
+    .limit(1);
+  return Boolean(row);
+}

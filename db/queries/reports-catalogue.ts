@@ -1,0 +1,72 @@
+import 'server-only';
+import { and, desc, eq, isNull, sql } from 'drizzle-orm';
+import { db } from '@/db/client';
+import { inspectionFees, machines, reportAccessGrants, reports } from '@/db/schema';
+
+/** What anyone browsing may see of a report: the machine and its overall condition, nothing bought. */
+const catalogueColumns = {
+  id: reports.id,
+  version: reports.version,
+  overallCondition: reports.overallCondition,
+  releasedAt: reports.releasedAt,
+  machineId: machines.id,
+  maker: machines.maker,
+  model: machines.model,
+  latheKind: machines.latheKind,
+  yearBuilt: machines.yearBuilt,
+  swingMm: machines.swingMm,
+  betweenCentresMm: machines.betweenCentresMm,
+  sizeClass: machines.sizeClass,
+  town: machines.town,
+  region: machines.region,
+  askingPriceMinor: machines.askingPriceMinor,
+  machineCurrency: machines.currency,
+  sellerId: machines.sellerId,
+  feeMinor: inspectionFees.amountMinor,
+  feeCurrency: inspectionFees.currency,
+};
+
+/** Inspections this person holds an unrevoked grant for (any version), as a joinable subquery. */
+function accessibleInspections(userId: string) {
+  return db
+    .selectDistinct({ inspectionId: reports.inspectionId })
+    .from(reportAccessGrants)
+    .innerJoin(reports, eq(reports.id, reportAccessGrants.reportId))
+    .where(and(eq(reportAccessGrants.userId, userId), isNull(reportAccessGrants.revokedAt)))
+    .as('accessible');
+}
+
+/** The current released version of every inspected machine, newest first, with the fee to buy it. */
+export async function listCatalogueReports(userId: string) {
+  const accessible = accessibleInspections(userId);
+  const rows = await db
+    .select({ ...catalogueColumns, hasAccess: sql<number>`${accessible.inspectionId} is not null` })
+    .from(reports)
+    .innerJoin(machines, eq(machines.id, reports.machineId))
+    .leftJoin(inspectionFees, and(eq(inspectionFees.machineType, machines.machineType), eq(inspectionFees.sizeClass, machines.sizeClass)))
+    .leftJoin(accessible, eq(accessible.inspectionId, reports.inspectionId))
+    .where(and(eq(reports.status, 'released'), isNull(reports.supersededById)))
+    .orderBy(desc(reports.releasedAt), desc(reports.id));
+  return rows.map((row) => ({ ...row, hasAccess: Boolean(Number(row.hasAccess)) }));
+}
+
+/** One released report's open summary, or null when it is not (or no longer) for sale. */
+export async function findCatalogueReport(reportId: number, userId: string) {
+  const accessible = accessibleInspections(userId);
+  const [row] = await db
+    .select({
+      ...catalogueColumns,
+      status: reports.status,
+      supersededById: reports.supersededById,
+      safetyFindings: reports.safetyFindings,
+      confidence: reports.confidence,
+      hasAccess: sql<number>`${accessible.inspectionId} is not null`,
+    })
+    .from(reports)
+    .innerJoin(machines, eq(machines.id, reports.machineId))
+    .leftJoin(inspectionFees, and(eq(inspectionFees.machineType, machines.machineType), eq(inspectionFees.sizeClass, machines.sizeClass)))
+    .leftJoin(accessible, eq(accessible.inspectionId, reports.inspectionId))
+    .where(and(eq(reports.id, reportId), eq(reports.status, 'released')))
+    .limit(1);
+  return row ? { ...row, hasAccess: Boolean(Number(row.hasAccess)) } : null;
+}

@@ -1,0 +1,109 @@
+import 'server-only';
+import { and, eq, isNull, lt } from 'drizzle-orm';
+import { z } from 'zod';
+import { inspections, machines, reportAccessGrants, reports, surveys, users } from '@/db/schema';
+import { releaseDraftReport } from '@/db/queries/report-writes';
+import { defineOperation } from '@/lib/auth/operation';
+import { AppError } from '@/lib/errors';
+import { appLink } from '@/lib/mail/links';
+import { enqueueEmail } from '@/lib/mail/outbox';
+import { reviewDecisionSchema, sendBackSchema } from '@/lib/validation/inspection';
+import { lockInspectionForTransition } from './inspection-access';
+import { moveInspection } from './status-events';
+
+/** The coordinator releases the graded draft: it becomes the current, immutable version. */
+export const releaseReport = defineOperation({
+  name: 'report.release',
+  entityType: 'report',
+  access: 'report.release',
+  input: reviewDecisionSchema,
+  async run({ actor, input, tx }) {
+    const inspection = await lockInspectionForTransition(tx, input.inspectionId, actor!, 'released');
+    const [machine] = await tx
+      .select({ id: machines.id, maker: machines.maker, model: machines.model, serialNumber: machines.serialNumber, sellerId: machines.sellerId, sellerEmail: users.email, sellerName: users.name })
+      .from(machines)
+      .innerJoin(users, eq(users.id, machines.sellerId))
+      .where(eq(machines.id, inspection.machineId));
+    const released = await releaseDraftReport(tx, { reportId: input.reportId, reviewerId: actor!.id, sellerId: machine!.sellerId });
+    if (!released || released.inspectionId !== inspection.id) {
+      throw new AppError('conflict', 'This draft is no longer open for release; reload the page.');
+    }
+    await moveInspection(tx, { inspectionId: inspection.id, from: inspection.status, to: 'released', actorId: actor!.id, note: input.comment || null, changes: { reviewerId: actor!.id } });
+
+    const machineSummary = { maker: machine!.maker, model: machine!.model, serialNumber: machine!.serialNumber };
+    await enqueueEmail(tx, {
+      to: machine!.sellerEmail,
+      template: 'report-released',
+      data: {
+        recipientName: machine!.sellerName,
+        audience: 'seller',
+        machine: machineSummary,
+        reportCode: released.verificationCode,
+        version: released.version,
+        overallCondition: released.overallCondition,
+        url: appLink(`/machines/${machine!.id}`),
+      },
+    });
+    // Buyers of an earlier version hear that a correction supersedes what they bought.
+    const earlierBuyers = await tx
+      .selectDistinct({ email: users.email, name: users.name })
+      .from(reportAccessGrants)
+      .innerJoin(reports, eq(reports.id, reportAccessGrants.reportId))
+      .innerJoin(users, eq(users.id, reportAccessGrants.userId))
+      .where(
+        and(
+          eq(reports.inspectionId, inspection.id),
+          lt(reports.version, released.version),
+          eq(reportAccessGrants.reason, 'purchase'),
+          isNull(reportAccessGrants.revokedAt),
+        ),
+      );
+    for (const buyer of earlierBuyers) {
+      await enqueueEmail(tx, {
+        to: buyer.email,
+        template: 'report-released',
+        data: {
+          recipientName: buyer.name,
+          audience: 'earlier-buyer',
+          machine: machineSummary,
+          reportCode: released.verificationCode,
+          version: released.version,
+          overallCondition: released.overallCondition,
+          url: appLink('/purchases'),
+        },
+      });
+    }
+    return { data: { reportId: released.id, version: released.version }, entityId: released.id, detail: { inspectionId: inspection.id, version: released.version, earlierBuyersTold: earlierBuyers.length } };
+  },
+});
+
+/** The coordinator returns the survey to the inspector with comments; the draft stays until resubmitted. */
+export const sendSurveyBack = defineOperation({
+  name: 'survey.send-back',
+  entityType: 'inspection',
+  access: 'report.review',
+  input: sendBackSchema,
+  async run({ actor, input, tx }) {
+    const inspection = await lockInspectionForTransition(tx, input.inspectionId, actor!, 'on_site');
+    await tx.update(surveys).set({ submittedAt: null }).where(eq(surveys.inspectionId, inspection.id));
+    await moveInspection(tx, { inspectionId: inspection.id, from: inspection.status, to: 'on_site', actorId: actor!.id, note: input.comment });
+    return { data: { inspectionId: inspection.id }, entityId: inspection.id, detail: { comment: input.comment } };
+  },
+});
+
+/** Reopens a released inspection so its report can be corrected; the released version stays as it is. */
+export const reopenForCorrection = defineOperation({
+  name: 'report.reopen-for-correction',
+  entityType: 'inspection',
+  access: 'report.review',
+  input: z.object({ inspectionId: z.coerce.number().int().positive(), comment: z.string().trim().min(5, 'Say what needs correcting').max(2000) }),
+  async run({ actor, input, tx }) {
+    const inspection = await lockInspectionForTransition(tx, input.inspectionId, actor!, 'on_site');
+    const [open] = await tx.select({ id: reports.id }).from(reports).where(and(eq(reports.inspectionId, inspection.id), eq(reports.status, 'draft')));
+    if (open) throw new AppError('conflict', 'A corrected draft is already open for this inspection.');
+    await tx.update(surveys).set({ submittedAt: null }).where(eq(surveys.inspectionId, inspection.id));
+    await moveInspection(tx, { inspectionId: inspection.id, from: inspection.status, to: 'on_site', actorId: actor!.id, note: `Reopened for correction: ${input.comment}` });
+    await tx.update(inspections).set({ reviewerId: null }).where(eq(inspections.id, inspection.id));
+    return { data: { inspectionId: inspection.id }, entityId: inspection.id, detail: { comment: input.comment } };
+  },
+});
