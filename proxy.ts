@@ -14,5 +14,5 @@ export function proxy(request: NextRequest) {
 }
 
 export const config = {
-  matcher: ['/dashboard/:path*', '/machines/:path*', '/inspections/:path*', '/jobs/:path*', '/reports/:path*', '/compare/:path*', '/purchases/:path*', '/admin/:path*'],
+  matcher: ['/dashboard/:path*', '/machines/:path*', '/inspections/:path*', '/jobs/:path*', '/reports/:path*', '/compare/:path*', '/purchases/:path*', '/admin/:path*', '/account/:path*'],
 };

@@ -72,8 +72,6 @@ export const STATUS_TRANSITIONS: ReadonlyArray<{ from: InspectionStatus; to: Ins
   { from: 'on_site', to: 'in_review', roles: ['inspector'] },
   { from: 'in_review', to: 'on_site', roles: ['admin'] },
   { from: 'in_review', to: 'released', roles: ['admin'] },
-  // A released report is corrected by reopening the survey; the correction is released as a new version.
-  { from: 'released', to: 'on_site', roles: ['admin'] },
   { from: 'requested', to: 'cancelled', roles: ['seller', 'admin'] },
   { from: 'booked', to: 'cancelled', roles: ['seller', 'admin'] },
   { from: 'on_site', to: 'cancelled', roles: ['admin'] },
@@ -85,16 +83,12 @@ export function mayTransition(role: Role, from: InspectionStatus, to: Inspection
 
 /** Navigation of the signed-in area by role: only pages that exist. */
 export const ROLE_NAVIGATION: Record<Role, ReadonlyArray<{ href: string; label: string }>> = {
-  seller: [
-    { href: '/dashboard', label: 'Overview' },
-    { href: '/machines', label: 'Machines' },
-  ],
+  seller: [{ href: '/dashboard', label: 'Overview' }],
   inspector: [{ href: '/dashboard', label: 'Overview' }],
   buyer: [{ href: '/dashboard', label: 'Overview' }],
   dealer: [{ href: '/dashboard', label: 'Overview' }],
   admin: [
     { href: '/dashboard', label: 'Overview' },
-    { href: '/inspections', label: 'Inspections' },
     { href: '/admin/people', label: 'People' },
     { href: '/admin/audit', label: 'Audit log' },
   ],

@@ -24,9 +24,11 @@ export default async function BackofficeLayout({ children }: { children: ReactNo
             ))}
           </nav>
           <div className="flex items-center gap-3">
-            <span className="text-sm text-ink-soft">
-              <span className="font-medium text-ink">{user.name ?? user.email}</span> · {ROLE_LABELS[user.role]}
-            </span>
+            <Link href="/account" className="flex min-h-touch items-center rounded-lg px-2 text-sm text-ink-soft hover:bg-paper-sunken" title="Your account">
+              <span>
+                <span className="font-medium text-ink">{user.name ?? user.email}</span> · {ROLE_LABELS[user.role]}
+              </span>
+            </Link>
             <form action={signOutAction}>
               <button type="submit" className="min-h-touch rounded-lg px-3 text-sm font-medium text-ink-soft hover:bg-paper-sunken hover:text-ink">
                 Sign out

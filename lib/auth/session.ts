@@ -1,5 +1,6 @@
 import 'server-only';
-import { redirect } from 'next/navigation';
+import { notFound, redirect } from 'next/navigation';
+import { can, type Permission } from '@/lib/roles';
 import { auth } from './config';
 
 /** The signed-in user for a page, or a redirect to sign-in. Pages still check permissions themselves. */
@@ -7,4 +8,11 @@ export async function requirePageSession() {
   const session = await auth();
   if (!session?.user?.id) redirect('/sign-in');
   return session.user;
+}
+
+/** The signed-in user if their role has the permission; anyone else sees "not found". */
+export async function requirePagePermission(permission: Permission) {
+  const user = await requirePageSession();
+  if (!can(user.role, permission)) notFound();
+  return user;
 }
