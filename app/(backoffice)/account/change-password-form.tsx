@@ -1,6 +1,7 @@
 'use client';
 
 import { useState } from 'react';
+import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
@@ -15,14 +16,15 @@ import { changePasswordAction } from './actions';
 type Schema = typeof changePasswordSchema;
 
 export function ChangePasswordForm({ email }: { email: string | null }) {
+  const router = useRouter();
   const { register, handleSubmit, formState, setError } = useForm<z.input<Schema>, unknown, z.output<Schema>>({ resolver: zodResolver(changePasswordSchema), mode: 'onTouched' });
   const [message, setMessage] = useState<string | null>(null);
 
   const onSubmit = handleSubmit(async (values) => {
     setMessage(null);
     const result = await changePasswordAction(values);
-    // The session ended with the change: a full page load lands on sign-in with a notice.
-    if (result.ok) window.location.assign('/sign-in?notice=password-changed');
+    // The session ended with the change: on to sign-in with a notice.
+    if (result.ok) router.push('/sign-in?notice=password-changed');
     else setMessage(applyFieldErrors(result, setError, ['currentPassword', 'password', 'passwordAgain']));
   });
 
