@@ -10,25 +10,23 @@ export default async function BackofficeLayout({ children }: { children: ReactNo
   return (
     <div className="min-h-screen">
       <header className="border-b border-line bg-paper-raised">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-5 py-2">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 px-5 py-1.5">
           <Logo href="/dashboard" />
-          <nav aria-label="Main" className="flex flex-1 flex-wrap gap-1">
+          <nav aria-label="Main" className="order-last -mx-2 flex w-full gap-1 overflow-x-auto md:order-none md:mx-0 md:w-auto md:flex-1">
             {ROLE_NAVIGATION[user.role].map((item) => (
               <Link
                 key={item.href}
                 href={item.href}
-                className="flex min-h-touch items-center rounded-lg px-3 font-medium text-ink-soft hover:bg-paper-sunken hover:text-ink"
+                className="flex min-h-touch shrink-0 items-center rounded-lg px-3 font-medium text-ink-soft hover:bg-paper-sunken hover:text-ink"
               >
                 {item.label}
               </Link>
             ))}
           </nav>
-          <div className="flex items-center gap-3">
-            <Link href="/account" className="flex min-h-touch items-center rounded-lg px-2 text-sm text-ink-soft hover:bg-paper-sunken" title="Your account">
-              <span>
-                <span className="font-medium text-ink">{user.name ?? user.email}</span> · {ROLE_LABELS[user.role]}
-              </span>
-            </Link>
+          <div className="ml-auto flex items-center gap-2">
+            <span className="text-sm text-ink-soft">
+              <span className="font-medium text-ink">{user.name ?? user.email}</span> · {ROLE_LABELS[user.role]}
+            </span>
             <form action={signOutAction}>
               <button type="submit" className="min-h-touch rounded-lg px-3 text-sm font-medium text-ink-soft hover:bg-paper-sunken hover:text-ink">
                 Sign out
