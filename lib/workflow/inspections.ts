@@ -131,6 +131,24 @@ export const cancelInspection = defineOperation({
       note: input.reason,
       changes: { cancelReason: input.reason },
     });
+    const parties = await loadParties(tx, current.id);
+    const machine = { maker: parties.maker, model: parties.model, serialNumber: parties.serialNumber };
+    const cancelledBy = actor!.role === 'admin' ? `${actor!.name ?? 'A coordinator'} (Waygrade)` : (actor!.name ?? 'The seller');
+    await enqueueEmail(tx, {
+      to: parties.sellerEmail,
+      template: 'inspection-cancelled',
+      data: { recipientName: parties.sellerName, audience: 'seller', machine, scheduledAt: current.scheduledAt, reason: input.reason, cancelledBy, url: appLink(`/machines/${current.machineId}`) },
+    });
+    if (current.inspectorId) {
+      const [inspector] = await tx.select({ email: users.email, name: users.name }).from(users).where(eq(users.id, current.inspectorId));
+      if (inspector) {
+        await enqueueEmail(tx, {
+          to: inspector.email,
+          template: 'inspection-cancelled',
+          data: { recipientName: inspector.name, audience: 'inspector', machine, scheduledAt: current.scheduledAt, reason: input.reason, cancelledBy, url: appLink('/jobs') },
+        });
+      }
+    }
     return { data: { inspectionId: current.id }, entityId: current.id, detail: { reason: input.reason } };
   },
 });

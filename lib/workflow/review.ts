@@ -3,7 +3,7 @@ import { and, eq, isNull, lt } from 'drizzle-orm';
 import { z } from 'zod';
 import { inspections, machines, reportAccessGrants, reports, surveys, users } from '@/db/schema';
 import { releaseDraftReport } from '@/db/queries/report-writes';
-import { defineOperation } from '@/lib/auth/operation';
+import { defineOperation, type Transaction } from '@/lib/auth/operation';
 import { AppError } from '@/lib/errors';
 import { appLink } from '@/lib/mail/links';
 import { enqueueEmail } from '@/lib/mail/outbox';
@@ -77,6 +77,29 @@ export const releaseReport = defineOperation({
   },
 });
 
+/** Tells the assigned inspector that the survey is open again, and why. */
+async function tellInspector(tx: Transaction, inspection: { id: number; machineId: number; inspectorId: string | null }, coordinatorName: string, comment: string, correction: boolean) {
+  if (!inspection.inspectorId) return;
+  const [row] = await tx
+    .select({ email: users.email, name: users.name, maker: machines.maker, model: machines.model, serialNumber: machines.serialNumber })
+    .from(users)
+    .innerJoin(machines, eq(machines.id, inspection.machineId))
+    .where(eq(users.id, inspection.inspectorId));
+  if (!row) return;
+  await enqueueEmail(tx, {
+    to: row.email,
+    template: 'survey-returned',
+    data: {
+      inspectorName: row.name,
+      machine: { maker: row.maker, model: row.model, serialNumber: row.serialNumber },
+      coordinatorName,
+      comment,
+      correction,
+      url: appLink(`/jobs/${inspection.id}`),
+    },
+  });
+}
+
 /** The coordinator returns the survey to the inspector with comments; the draft stays until resubmitted. */
 export const sendSurveyBack = defineOperation({
   name: 'survey.send-back',
@@ -87,6 +110,7 @@ export const sendSurveyBack = defineOperation({
     const inspection = await lockInspectionForTransition(tx, input.inspectionId, actor!, 'on_site');
     await tx.update(surveys).set({ submittedAt: null }).where(eq(surveys.inspectionId, inspection.id));
     await moveInspection(tx, { inspectionId: inspection.id, from: inspection.status, to: 'on_site', actorId: actor!.id, note: input.comment });
+    await tellInspector(tx, inspection, actor!.name ?? 'The coordinator', input.comment, false);
     return { data: { inspectionId: inspection.id }, entityId: inspection.id, detail: { comment: input.comment } };
   },
 });
@@ -104,6 +128,7 @@ export const reopenForCorrection = defineOperation({
     await tx.update(surveys).set({ submittedAt: null }).where(eq(surveys.inspectionId, inspection.id));
     await moveInspection(tx, { inspectionId: inspection.id, from: inspection.status, to: 'on_site', actorId: actor!.id, note: `Reopened for correction: ${input.comment}` });
     await tx.update(inspections).set({ reviewerId: null }).where(eq(inspections.id, inspection.id));
+    await tellInspector(tx, inspection, actor!.name ?? 'The coordinator', input.comment, true);
     return { data: { inspectionId: inspection.id }, entityId: inspection.id, detail: { comment: input.comment } };
   },
 });

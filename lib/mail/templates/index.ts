@@ -1,11 +1,13 @@
 import type { RenderedMail } from '../render';
 import { accountExists } from './account-exists';
 import { inspectionBooked } from './inspection-booked';
+import { inspectionCancelled } from './inspection-cancelled';
 import { invitation } from './invitation';
 import { paymentReceipt } from './payment-receipt';
 import { refund } from './refund';
 import { reportReleased } from './report-released';
 import { resetPassword } from './reset-password';
+import { surveyReturned } from './survey-returned';
 import { surveySubmitted } from './survey-submitted';
 import { verifyEmail } from './verify-email';
 
@@ -16,7 +18,9 @@ export const MAIL_TEMPLATES = {
   invitation,
   'account-exists': accountExists,
   'inspection-booked': inspectionBooked,
+  'inspection-cancelled': inspectionCancelled,
   'survey-submitted': surveySubmitted,
+  'survey-returned': surveyReturned,
   'report-released': reportReleased,
   'payment-receipt': paymentReceipt,
   refund,

@@ -27,6 +27,14 @@ const SAMPLES: { [N in MailTemplateName]: { data: MailTemplateData<N>; mustSay: 
     },
     mustSay: ['Harlow Turnmaster 280 (serial HT-1182)', '4 Mar 2026', '08:30 UTC', 'Lowmere, Brenmark', 'Ilse Marwick', 'Gate B'],
   },
+  'inspection-cancelled': {
+    data: { recipientName: HOSTILE, audience: 'inspector', machine: MACHINE, scheduledAt: WHEN, reason: 'Machine sold privately', cancelledBy: 'Gwen Albright', url: LINK },
+    mustSay: ['cancelled', 'Machine sold privately', '4 Mar 2026'],
+  },
+  'survey-returned': {
+    data: { inspectorName: HOSTILE, machine: MACHINE, coordinatorName: 'Nadia Ferrand', comment: 'Repeat the level run with the stand unloaded', correction: false, url: LINK },
+    mustSay: ['sent the survey', 'Repeat the level run'],
+  },
   'survey-submitted': {
     data: { coordinatorName: HOSTILE, machine: MACHINE, inspectorName: 'Ilse Marwick', submittedAt: WHEN, findingsOutOfTolerance: 3, url: LINK },
     mustSay: ['Ilse Marwick', 'Readings outside tolerance'],
