@@ -25,6 +25,8 @@ export default defineConfig({
         test: {
           name: 'integration',
           include: ['tests/integration/**/*.test.ts'],
+          // next-auth imports "next/server" without an extension; letting Vite resolve it works like Next does.
+          server: { deps: { inline: ['next-auth', '@auth/core'] } },
           environment: 'node',
           fileParallelism: false,
           testTimeout: 30_000,

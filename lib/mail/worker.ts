@@ -20,22 +20,31 @@ export function retryDelayMs(attemptsSoFar: number) {
   return Math.min(OUTBOX_POLICY.firstRetryMs * 2 ** Math.max(0, attemptsSoFar - 1), OUTBOX_POLICY.longestRetryMs);
 }
 
-type DrainOptions = { now?: Date; transport?: Pick<Transporter, 'sendMail'> | null; limit?: number };
+type DrainOptions = {
+  now?: Date;
+  transport?: Pick<Transporter, 'sendMail'> | null;
+  limit?: number;
+  /** Only mail to this address, e.g. to resend one person's mail now. */
+  to?: string;
+};
 export type DrainSummary = { claimed: number; sent: number; retrying: number; failed: number };
 
 /**
  * Claims due rows with SELECT … FOR UPDATE SKIP LOCKED and marks them "sending" in the same
  * transaction, so two app servers draining at once never pick the same message.
  */
-async function claimDue(now: Date, limit: number) {
+async function claimDue(now: Date, limit: number, to: string | undefined) {
   return db.transaction(async (tx) => {
     const rows = await tx
       .select({ id: emailOutbox.id, toAddress: emailOutbox.toAddress, subject: emailOutbox.subject, textBody: emailOutbox.textBody, htmlBody: emailOutbox.htmlBody, attempts: emailOutbox.attempts })
       .from(emailOutbox)
       .where(
-        or(
-          and(eq(emailOutbox.status, 'pending'), lte(emailOutbox.nextAttemptAt, now)),
-          and(eq(emailOutbox.status, 'sending'), lt(emailOutbox.lockedUntil, now)),
+        and(
+          or(
+            and(eq(emailOutbox.status, 'pending'), lte(emailOutbox.nextAttemptAt, now)),
+            and(eq(emailOutbox.status, 'sending'), lt(emailOutbox.lockedUntil, now)),
+          ),
+          to ? eq(emailOutbox.toAddress, to) : undefined,
         ),
       )
       .orderBy(asc(emailOutbox.nextAttemptAt))
@@ -56,7 +65,7 @@ export async function drainOutbox(options: DrainOptions = {}): Promise<DrainSumm
   const transport = options.transport === undefined ? mailTransport() : options.transport;
   const summary: DrainSummary = { claimed: 0, sent: 0, retrying: 0, failed: 0 };
   if (!transport) return summary;
-  const rows = await claimDue(now, options.limit ?? OUTBOX_POLICY.batchSize);
+  const rows = await claimDue(now, options.limit ?? OUTBOX_POLICY.batchSize, options.to);
   summary.claimed = rows.length;
   for (const row of rows) {
     try {
