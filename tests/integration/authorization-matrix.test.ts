@@ -322,14 +322,14 @@ async function judge(actor: Actor | null, call: () => Promise<{ status?: number;
 }
 
 async function callAction(endpoint: Endpoint, input: unknown) {
-  const module = (await import(/* @vite-ignore */ endpoint.file)) as Record<string, (input: unknown) => Promise<{ ok: boolean; code?: string }>>;
-  return module[endpoint.name]!(input);
+  const loaded = (await import(/* @vite-ignore */ endpoint.file)) as Record<string, (input: unknown) => Promise<{ ok: boolean; code?: string }>>;
+  return loaded[endpoint.name]!(input);
 }
 
 async function callRoute(endpoint: Endpoint, call: HttpCall) {
-  const module = (await import(/* @vite-ignore */ endpoint.file)) as Record<string, (request: NextRequest, context: { params: Promise<Record<string, string>> }) => Promise<Response>>;
+  const loaded = (await import(/* @vite-ignore */ endpoint.file)) as Record<string, (request: NextRequest, context: { params: Promise<Record<string, string>> }) => Promise<Response>>;
   const init = call.body === undefined ? { method: call.method ?? 'GET' } : { method: call.method ?? 'POST', body: JSON.stringify(call.body), headers: { 'content-type': 'application/json' } };
-  const response = await module[endpoint.name]!(new NextRequest(new URL(call.url, 'http://localhost:3000'), init), { params: Promise.resolve(call.params) });
+  const response = await loaded[endpoint.name]!(new NextRequest(new URL(call.url, 'http://localhost:3000'), init), { params: Promise.resolve(call.params) });
   const body = (await response.json().catch(() => ({}))) as { code?: string };
   return { status: response.status, code: body.code };
 }
@@ -366,9 +366,9 @@ describe('the authorisation matrix', () => {
 
   it('reads each module’s exports as the module itself exports them', async () => {
     for (const file of new Set(ENDPOINTS.filter((e) => e.type !== 'inline').map((e) => e.file))) {
-      const module = (await import(/* @vite-ignore */ file)) as Record<string, unknown>;
+      const loaded = (await import(/* @vite-ignore */ file)) as Record<string, unknown>;
       const relative = path.relative(ROOT, file).split(path.sep).join('/');
-      const real = Object.keys(module).filter((name) => typeof module[name] === 'function' && (!/\/route\.tsx?$/.test(relative) || HTTP_METHODS.has(name)));
+      const real = Object.keys(loaded).filter((name) => typeof loaded[name] === 'function' && (!/\/route\.tsx?$/.test(relative) || HTTP_METHODS.has(name)));
       const found = ENDPOINTS.filter((e) => e.file === file).map((e) => e.name);
       expect(found.sort(), relative).toEqual(real.sort());
     }
