@@ -84,7 +84,7 @@ export function mayTransition(role: Role, from: InspectionStatus, to: Inspection
 /** Navigation of the signed-in area by role: only pages that exist. */
 export const ROLE_NAVIGATION: Record<Role, ReadonlyArray<{ href: string; label: string }>> = {
   seller: [{ href: '/dashboard', label: 'Overview' }],
-  inspector: [{ href: '/dashboard', label: 'Overview' }],
+  inspector: [{ href: '/dashboard', label: 'Overview' }, { href: '/jobs', label: 'My jobs' }],
   buyer: [{ href: '/dashboard', label: 'Overview' }],
   dealer: [{ href: '/dashboard', label: 'Overview' }],
   admin: [

@@ -1,0 +1,44 @@
+import type { ComponentType } from 'react';
+import type { SurveySectionId } from '@/lib/survey/survey-sections';
+import type { SurveyForm } from './fields/survey-form';
+import { AccessoriesSection } from './sections/accessories-section';
+import { BedSection } from './sections/bed-section';
+import { DriveSection } from './sections/drive-section';
+import { ElectricalSection } from './sections/electrical-section';
+import { GearboxSection } from './sections/gearbox-section';
+import { IdentitySection } from './sections/identity-section';
+import { LubricationSection } from './sections/lubrication-section';
+import { SlidesSection } from './sections/slides-section';
+import { SpindleSection } from './sections/spindle-section';
+import { TailstockSection } from './sections/tailstock-section';
+import { TestCutsSection } from './sections/test-cuts-section';
+
+/** The screen for each survey section. */
+export const SECTION_SCREENS: Readonly<Record<SurveySectionId, ComponentType<{ form: SurveyForm }>>> = {
+  identity: IdentitySection,
+  lubrication: LubricationSection,
+  gearboxAndFeeds: GearboxSection,
+  drive: DriveSection,
+  bedAndWays: BedSection,
+  spindle: SpindleSection,
+  slidesAndScrews: SlidesSection,
+  tailstock: TailstockSection,
+  testCuts: TestCutsSection,
+  electricalAndSafety: ElectricalSection,
+  accessories: AccessoriesSection,
+};
+
+/** Where each section keeps its data in the survey (identity spans the machine and the instruments). */
+export const SECTION_DATA_KEYS: Readonly<Record<SurveySectionId, readonly string[]>> = {
+  identity: ['machine', 'instruments'],
+  lubrication: ['lubrication'],
+  gearboxAndFeeds: ['gearboxAndFeeds'],
+  drive: ['drive'],
+  bedAndWays: ['bedAndWays'],
+  spindle: ['spindle'],
+  slidesAndScrews: ['slidesAndScrews'],
+  tailstock: ['tailstock'],
+  testCuts: ['testCuts'],
+  electricalAndSafety: ['electricalAndSafety'],
+  accessories: ['accessories'],
+};

@@ -1,0 +1,13 @@
+import { ALL_RUBRICS, type Rubric } from '@/lib/scoring';
+
+const rubric = (id: string): Rubric => {
+  const found = ALL_RUBRICS.find((r) => r.id === id);
+  if (!found) throw new Error(`No rubric "${id}" in the scoring library`);
+  return found;
+};
+
+export const WEAR = rubric('wear');
+export const NOISE = rubric('noise');
+export const OIL_CONDITION = rubric('oil-condition');
+export const DEBRIS = rubric('debris');
+export const LEAKS = rubric('leaks');
