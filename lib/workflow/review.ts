@@ -44,9 +44,9 @@ export const releaseReport = defineOperation({
         url: appLink(`/machines/${machine!.id}`),
       },
     });
-    // Buyers of an earlier version hear that a correction supersedes what they bought.
-    const earlierBuyers = await tx
-      .selectDistinct({ email: users.email, name: users.name })
+    // Buyers of an earlier version get the correction at no charge and hear that it supersedes theirs.
+    const earlierGrants = await tx
+      .select({ userId: reportAccessGrants.userId, orderId: reportAccessGrants.orderId, email: users.email, name: users.name })
       .from(reportAccessGrants)
       .innerJoin(reports, eq(reports.id, reportAccessGrants.reportId))
       .innerJoin(users, eq(users.id, reportAccessGrants.userId))
@@ -58,7 +58,9 @@ export const releaseReport = defineOperation({
           isNull(reportAccessGrants.revokedAt),
         ),
       );
+    const earlierBuyers = [...new Map(earlierGrants.map((g) => [g.userId, g])).values()];
     for (const buyer of earlierBuyers) {
+      await tx.insert(reportAccessGrants).values({ reportId: released.id, userId: buyer.userId, reason: 'purchase', orderId: buyer.orderId });
       await enqueueEmail(tx, {
         to: buyer.email,
         template: 'report-released',
