@@ -95,6 +95,7 @@ export async function startMariaDb(projectRoot, databases, log = console.log) {
         '--collation-server=utf8mb4_unicode_ci',
         '--skip-name-resolve',
         '--max-connections=500',
+        '--max-allowed-packet=64M',
         '--innodb-buffer-pool-size=512M',
         '--innodb-flush-log-at-trx-commit=1',
       ],
