@@ -1,15 +1,46 @@
 // A private MariaDB on loopback, with its data in the project's git-ignored .data folder.
 // Start is idempotent: a second start finds the running server by its PID file and a ping.
 import { spawn, spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import net from 'node:net';
 import path from 'node:path';
 import { ensureDebianPackage, findProgram } from './debian-package.mjs';
 
 export const DB_USER = 'waygrade';
 export const DB_PASSWORD = 'waygrade-local';
 
-export function mariaDbPaths(projectRoot, port = Number(process.env.MARIADB_PORT ?? 3307)) {
+const DEFAULT_PORT = 3307;
+
+/** The port this data folder's server uses: MARIADB_PORT, else the one chosen at its first start. */
+function configuredPort(dir) {
+  if (process.env.MARIADB_PORT) return Number(process.env.MARIADB_PORT);
+  const file = path.join(dir, 'port');
+  return existsSync(file) ? Number(readFileSync(file, 'utf8').trim()) : DEFAULT_PORT;
+}
+
+function portIsFree(port) {
+  return new Promise((resolve) => {
+    const server = net.createServer();
+    server.once('error', () => resolve(false));
+    server.listen(port, '127.0.0.1', () => server.close(() => resolve(true)));
+  });
+}
+
+/** Another checkout's server may hold the default port: take the next free one and remember it. */
+async function choosePort(dir, wanted) {
+  if (process.env.MARIADB_PORT || (await portIsFree(wanted))) return wanted;
+  for (let port = wanted + 1; port < wanted + 50; port += 1) {
+    if (await portIsFree(port)) {
+      writeFileSync(path.join(dir, 'port'), String(port));
+      return port;
+    }
+  }
+  throw new Error(`No free port for MariaDB near ${wanted}; set MARIADB_PORT`);
+}
+
+export function mariaDbPaths(projectRoot) {
   const dir = path.join(projectRoot, '.data', 'mariadb');
+  const port = configuredPort(dir);
   return {
     port,
     dir,
@@ -56,7 +87,7 @@ const sleep = (ms) => new Promise((resolve) => setTimeout(resolve, ms));
 
 /** Starts the server if it is not running and creates the databases and the app's user. */
 export async function startMariaDb(projectRoot, databases, log = console.log) {
-  const paths = mariaDbPaths(projectRoot);
+  let paths = mariaDbPaths(projectRoot);
   const mariadbd = ensureDebianPackage('mariadbd', 'mariadb-server', log);
   let startedHere = false;
 
@@ -64,6 +95,11 @@ export async function startMariaDb(projectRoot, databases, log = console.log) {
     log(`MariaDB already running on 127.0.0.1:${paths.port}`);
   } else {
     mkdirSync(paths.dir, { recursive: true });
+    const port = await choosePort(paths.dir, paths.port);
+    if (port !== paths.port) {
+      log(`Port ${paths.port} is taken by another server; this project's MariaDB uses ${port}`);
+      paths = mariaDbPaths(projectRoot);
+    }
     if (!existsSync(path.join(paths.dataDir, 'mysql'))) {
       log('Initialising MariaDB data folder…');
       const installDb = findProgram('mariadb-install-db') ?? 'mariadb-install-db';

@@ -4,7 +4,7 @@ import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { randomBytes } from 'node:crypto';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { ProcessGroup, run, waitForPort } from './processes.mjs';
+import { ProcessGroup, portIsOpen, run, waitForPort } from './processes.mjs';
 import { databaseUrl, startMariaDb, stopMariaDb } from './mariadb.mjs';
 import { findProgram } from './debian-package.mjs';
 
@@ -138,6 +138,11 @@ export async function bringUp(mode, { resetDatabase = false } = {}) {
         wanted: !process.env.SMTP_URL,
       },
     ];
+    for (const port of [ports.app, ...standIns.filter((s) => s.wanted).map((s) => s.port)]) {
+      if (await portIsOpen(port)) {
+        throw new Error(`Port ${port} is already in use — is another Waygrade running? Stop it, or run with WAYGRADE_PORT_OFFSET=<n> to shift every port.`);
+      }
+    }
     for (const service of standIns) {
       if (!service.wanted || !existsSync(path.join(root, service.entry))) continue;
       const child = group.start(service.name, node, [...tsx, service.entry], {
