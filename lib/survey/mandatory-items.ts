@@ -27,6 +27,12 @@ export const MANDATORY_ITEMS: readonly MandatoryItem[] = [
   { id: 'centres', section: 'identity', label: 'Distance between centres', covers: ['machine.distanceBetweenCentres'], isPresent: (s) => hasLength(s.machine?.distanceBetweenCentres) },
   { id: 'level-sensitivity', section: 'identity', label: 'Level sensitivity per division', covers: ['instruments.levelSensitivity'], isPresent: (s) => typeof s.instruments?.levelSensitivity?.value === 'number' },
   { id: 'photo', section: 'identity', label: 'At least one photo of the machine', isPresent: (_s, c) => c.photoCount > 0 },
+  {
+    id: 'stand-load',
+    section: 'bedAndWays',
+    label: 'Load on the stand while levelling',
+    isPresent: (s) => has(s.bedAndWays?.standLoadState),
+  },
   { id: 'station-spacing', section: 'bedAndWays', label: 'Bed levelling: distance between stations', covers: ['bedAndWays.levelling.stationSpacing'], isPresent: (s) => hasLength(s.bedAndWays?.levelling?.stationSpacing) },
   {
     id: 'longitudinal-readings',

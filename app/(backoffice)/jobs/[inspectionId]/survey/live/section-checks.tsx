@@ -10,6 +10,11 @@ function describeMeasured(check: CheckResult) {
   return `${measured} · limit ${Number(check.permissible.value.toPrecision(4))} ${check.permissible.unit}`;
 }
 
+/** The library's reason a check could not be graded yet, without its standard closing sentence. */
+function notMeasuredReason(check: CheckResult) {
+  return check.explanation.text.replace(/^Not measured: /, '').replace(/\s*Counts against confidence.*$/, '');
+}
+
 /**
  * The bands of this screen's checks, graded by the scoring library in the browser from what is typed
  * so far. Unmeasured checks say so; nothing is assumed to pass.
@@ -28,7 +33,11 @@ export function SectionChecks({ checks, ready }: { checks: readonly CheckResult[
             <li key={check.id} className="flex flex-wrap items-center justify-between gap-x-3 gap-y-1 py-2.5">
               <div className="min-w-0 flex-1">
                 <p className="font-medium leading-snug">{check.label}</p>
-                {check.status === 'measured' ? <p className="figures text-sm text-ink-soft">{describeMeasured(check)}</p> : null}
+                {check.status === 'measured' ? (
+                  <p className="figures text-sm text-ink-soft">{describeMeasured(check)}</p>
+                ) : (
+                  <p className="text-sm text-ink-soft">{notMeasuredReason(check)}</p>
+                )}
                 {typeof check.details.safetyFinding === 'string' ? <p className="text-sm font-semibold text-band-rebuild">Fix before use: {check.details.safetyFinding}</p> : null}
               </div>
               <BandBadge band={check.band} size="sm" />
