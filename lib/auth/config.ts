@@ -32,6 +32,13 @@ const config = (): NextAuthConfig => ({
   useSecureCookies: env().NODE_ENV === 'production' && env().APP_URL.startsWith('https:'),
   session: { strategy: 'jwt', maxAge: 60 * 60 * 12 },
   pages: { signIn: '/sign-in' },
+  logger: {
+    // A refused sign-in is an expected answer (and is in the audit log), not a server error.
+    error(error) {
+      if (error instanceof CredentialsSignin) return;
+      console.error(error);
+    },
+  },
   providers: [
     Credentials({
       credentials: { email: { label: 'E-mail' }, password: { label: 'Password', type: 'password' } },
