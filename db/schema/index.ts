@@ -8,3 +8,4 @@ export * from './payments';
 export * from './market';
 export * from './audit';
 export * from './outbox';
+export * from './shortlists';
