@@ -31,6 +31,8 @@ let exitCode = 1;
 try {
   await ensureNodeModules();
   const chromium = ensureDebianPackage('chromium', 'chromium');
+  // The report PDF tests read their text back with pdftotext and render pages with pdftoppm.
+  ensureDebianPackage('pdftotext', 'poppler-utils');
   stack = await bringUp('test', { resetDatabase: true });
   const env = { ...stack.env, CHROMIUM_PATH: chromium, NODE_ENV: 'test' };
 

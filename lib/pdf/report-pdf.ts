@@ -1,0 +1,42 @@
+import 'server-only';
+import { findReportForDocument } from '@/db/queries/report-document';
+import { env } from '@/lib/env';
+import { AppError } from '@/lib/errors';
+import { loadReportPhotos } from './load-report-photos';
+import { pdfCache } from './pdf-cache';
+import { renderReportPdf } from './render-report-pdf';
+import type { ReportDocumentData } from './report-document-data';
+
+export function verificationUrl(code: string) {
+  return `${env().APP_URL.replace(/\/$/, '')}/verify/${code}`;
+}
+
+/**
+ * The PDF of one report version: from the cache when a released or withdrawn version has been
+ * rendered before, otherwise rendered now. Drafts are rendered every time and never cached.
+ */
+export async function reportPdf(reportId: number, cache = pdfCache()): Promise<{ pdf: Buffer; fromCache: boolean }> {
+  const report = await findReportForDocument(reportId);
+  if (!report) throw new AppError('not_found');
+  const cacheable = report.status !== 'draft';
+  if (cacheable) {
+    const cached = await cache.get(report.id, report.version);
+    if (cached) return { pdf: cached, fromCache: true };
+  }
+  const { photos, complete } = await loadReportPhotos(report.photos.map((p) => ({ section: p.section, caption: p.caption, url: p.originalUrl })));
+  const data: ReportDocumentData = {
+    reportId: report.id,
+    version: report.version,
+    verificationCode: report.verificationCode,
+    verificationUrl: verificationUrl(report.verificationCode),
+    releasedAt: report.releasedAt,
+    machine: report.machine,
+    inspectorName: report.inspectorName,
+    reviewerName: report.reviewerName,
+    result: report.result,
+    photos,
+  };
+  const pdf = await renderReportPdf(data);
+  if (cacheable && complete) await cache.put(report.id, report.version, pdf);
+  return { pdf, fromCache: false };
+}
