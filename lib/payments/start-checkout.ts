@@ -1,0 +1,79 @@
+import 'server-only';
+import { eq } from 'drizzle-orm';
+import { machines, orders, reports } from '@/db/schema';
+import { findInspectionFee } from '@/db/queries/fees';
+import { hasReportAccess } from '@/db/queries/report-access';
+import { defineOperation } from '@/lib/auth/operation';
+import { env } from '@/lib/env';
+import { AppError } from '@/lib/errors';
+import { reportIdSchema } from '@/lib/validation/payments';
+import { stripeClient } from './stripe-client';
+
+/**
+ * A buyer starts paying for a report: a pending order and a hosted checkout page for the fee of the
+ * machine's size class. Nothing is granted here; access comes only from the provider's webhook.
+ */
+export const startCheckout = defineOperation({
+  name: 'report.checkout',
+  entityType: 'order',
+  access: 'report.buy',
+  input: reportIdSchema,
+  async run({ actor, input, tx }) {
+    const [report] = await tx
+      .select({
+        id: reports.id,
+        status: reports.status,
+        supersededById: reports.supersededById,
+        version: reports.version,
+        maker: machines.maker,
+        model: machines.model,
+        serialNumber: machines.serialNumber,
+        machineType: machines.machineType,
+        sizeClass: machines.sizeClass,
+      })
+      .from(reports)
+      .innerJoin(machines, eq(machines.id, reports.machineId))
+      .where(eq(reports.id, input.reportId))
+      .limit(1);
+    if (!report || report.status !== 'released') throw new AppError('not_found', 'This report is not for sale.');
+    if (report.supersededById) throw new AppError('conflict', 'A newer version of this report has been released; buy that one instead.');
+    if (await hasReportAccess(tx, actor!.id, report.id)) throw new AppError('conflict', 'You already have this report: it is in your purchases.');
+    const fee = await findInspectionFee(tx, report.machineType, report.sizeClass);
+    if (!fee) throw new AppError('conflict', 'No fee is set for this size of machine yet. Please try again later.');
+
+    const [order] = await tx
+      .insert(orders)
+      .values({ reportId: report.id, buyerId: actor!.id, amountMinor: fee.amountMinor, currency: fee.currency, status: 'pending' })
+      .$returningId();
+    const orderId = order!.id;
+    const appUrl = env().APP_URL.replace(/\/$/, '');
+    const machineName = `${report.maker} ${report.model}${report.serialNumber ? `, serial ${report.serialNumber}` : ''}`;
+    const metadata = { orderId: String(orderId), reportId: String(report.id) };
+    // Created inside the transaction: if the provider refuses, the pending order disappears with it.
+    const session = await stripeClient().checkout.sessions.create(
+      {
+        mode: 'payment',
+        line_items: [
+          {
+            quantity: 1,
+            price_data: {
+              currency: fee.currency.toLowerCase(),
+              unit_amount: fee.amountMinor,
+              product_data: { name: `Waygrade condition report: ${machineName}`, description: `Report ${report.id}, version ${report.version}` },
+            },
+          },
+        ],
+        client_reference_id: String(orderId),
+        customer_email: actor!.email ?? undefined,
+        metadata,
+        payment_intent_data: { metadata, description: `Waygrade report ${report.id} v${report.version}` },
+        success_url: `${appUrl}/purchases?checkout={CHECKOUT_SESSION_ID}`,
+        cancel_url: `${appUrl}/reports/${report.id}?checkout=cancelled`,
+      },
+      { idempotencyKey: `waygrade-checkout-order-${orderId}` },
+    );
+    if (!session.url) throw new AppError('unavailable', 'The payment page could not be opened. Nothing was charged; please try again.');
+    await tx.update(orders).set({ providerCheckoutSessionId: session.id }).where(eq(orders.id, orderId));
+    return { data: { orderId, checkoutUrl: session.url }, entityId: orderId, detail: { reportId: report.id, amountMinor: fee.amountMinor } };
+  },
+});
