@@ -1,6 +1,6 @@
 import 'server-only';
 import { and, eq, isNull, sql } from 'drizzle-orm';
-import { inspections, inspectionStatusEvents, machines, surveys } from '@/db/schema';
+import { inspections, inspectionStatusEvents, machines, surveys, users } from '@/db/schema';
 import type { InspectionStatus } from '@/db/schema/inspections';
 import type { Database } from '@/db/client';
 
@@ -93,4 +93,12 @@ export async function moveInspectionStatus(
     actorId: input.actorId,
     note: input.note ?? null,
   });
+}
+
+/** Active coordinators, who are told when a survey is waiting for review. */
+export async function listActiveCoordinators(reader: Reader) {
+  return reader
+    .select({ name: users.name, email: users.email })
+    .from(users)
+    .where(and(eq(users.role, 'admin'), isNull(users.deactivatedAt)));
 }

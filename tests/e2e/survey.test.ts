@@ -5,6 +5,7 @@ import sharp from 'sharp';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_LOGINS } from '@/db/seed/demo-logins.mjs';
+import type { DraftSurvey } from '@/lib/survey/draft-survey-schema';
 import { openBrowser, screenshot, signIn } from '../support/browser';
 
 // Petra has two booked visits in the demo data; the cross-role journey works with its own inspection.
@@ -28,7 +29,7 @@ async function next(page: Page, title: string) {
 async function savedSurvey(page: Page, inspectionId: string) {
   const response = await page.request.get(`/api/surveys/${inspectionId}`);
   expect(response.status()).toBe(200);
-  return (await response.json()) as { data: { version: number; data: Record<string, any>; status: string; submittedAt: string | null } };
+  return (await response.json()) as { data: { version: number; data: DraftSurvey; status: string; submittedAt: string | null } };
 }
 
 async function waitUntilSaved(page: Page) {
@@ -128,7 +129,7 @@ describe('the inspector’s survey on a phone', () => {
     await context.setOffline(false);
     await waitUntilSaved(page);
     const afterReconnect = await savedSurvey(page, inspectionId);
-    expect(afterReconnect.data.data.bedAndWays.levelling.longitudinalReadings).toEqual([1.5, 0.5, -0.5, -1, 0.5]);
+    expect(afterReconnect.data.data.bedAndWays?.levelling?.longitudinalReadings).toEqual([1.5, 0.5, -0.5, -1, 0.5]);
     await page.getByTestId('section-checks').getByText('Bed straightness, vertical plane').waitFor();
     await screenshot(page, 'survey-06-bed');
 
@@ -192,6 +193,6 @@ describe('the inspector’s survey on a phone', () => {
     const submitted = await savedSurvey(page, inspectionId);
     expect(submitted.data.status).toBe('in_review');
     expect(submitted.data.submittedAt).not.toBeNull();
-    expect(submitted.data.data.testCuts.twoCollar.diameterNearTailstock).toEqual({ value: 25.03, unit: 'mm' });
+    expect(submitted.data.data.testCuts?.twoCollar?.diameterNearTailstock).toEqual({ value: 25.03, unit: 'mm' });
   }, 240_000);
 });

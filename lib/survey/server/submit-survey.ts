@@ -2,10 +2,12 @@ import 'server-only';
 import { insertDraftReport } from '@/db/queries/report-writes';
 import { loadScoreOptions } from '@/db/queries/scoring-inputs';
 import { countSurveyPhotos } from '@/db/queries/survey-photos';
-import { findInspectionWithMachine, findSurvey, markSurveySubmitted, moveInspectionStatus } from '@/db/queries/surveys';
+import { findInspectionWithMachine, findSurvey, listActiveCoordinators, markSurveySubmitted, moveInspectionStatus } from '@/db/queries/surveys';
 import { defineOperation } from '@/lib/auth/operation';
 import { AppError } from '@/lib/errors';
 import { INSPECTION_STATUS_LABELS } from '@/lib/inspection-status';
+import { appLink } from '@/lib/mail/links';
+import { enqueueEmail } from '@/lib/mail/outbox';
 import { mayTransition } from '@/lib/roles';
 import { scoreSurvey, toMillimetres, type LatheSurvey } from '@/lib/scoring';
 import { submitSurveySchema } from '@/lib/validation/survey';
@@ -65,6 +67,22 @@ export const submitSurvey = defineOperation({
     const submittedAt = new Date();
     await markSurveySubmitted(tx, inspection.id, submittedAt);
     await moveInspectionStatus(tx, { inspectionId: inspection.id, from: inspection.status, to: 'in_review', actorId: actor!.id, note: 'Survey submitted' });
+    // Queued in this transaction: the coordinators hear of it only if the submission commits.
+    const findingsOutOfTolerance = result.checks.filter((check) => check.q !== null && check.q > 1).length;
+    for (const coordinator of await listActiveCoordinators(tx)) {
+      await enqueueEmail(tx, {
+        to: coordinator.email,
+        template: 'survey-submitted',
+        data: {
+          coordinatorName: coordinator.name,
+          machine: { maker: inspection.maker, model: inspection.model, serialNumber: data.machine.serialNumber ?? inspection.serialNumber },
+          inspectorName: actor!.name ?? 'The inspector',
+          submittedAt,
+          findingsOutOfTolerance,
+          url: appLink(`/inspections/${inspection.id}/review`),
+        },
+      });
+    }
     return {
       data: {
         inspectionId: inspection.id,
