@@ -23,7 +23,7 @@ function detailText(detail: unknown) {
 }
 
 const COLUMNS: ColumnDef<AuditRow, unknown>[] = [
-  { id: 'when', header: 'When (UTC)', cell: ({ row }) => <span className="figures whitespace-nowrap text-sm">{formatDateTime(row.original.createdAt)}</span> },
+  { id: 'when', header: 'When (UTC)', cell: ({ row }) => <span className="figures text-sm sm:whitespace-nowrap">{formatDateTime(row.original.createdAt)}</span> },
   {
     id: 'actor',
     header: 'Who',
@@ -36,8 +36,19 @@ const COLUMNS: ColumnDef<AuditRow, unknown>[] = [
       ) : (
         <span className="text-ink-soft">Signed out</span>
       ),
+    meta: { className: 'hidden sm:table-cell' },
   },
-  { id: 'action', header: 'Action', cell: ({ row }) => <code className="text-sm">{row.original.action}</code> },
+  {
+    id: 'action',
+    header: 'Action',
+    cell: ({ row }) => (
+      <>
+        <code className="break-all text-sm">{row.original.action}</code>
+        {/* On phones the "Who" column is hidden: the name goes under the action. */}
+        <span className="block text-sm text-ink-soft sm:hidden">{row.original.actorName ?? row.original.actorEmail ?? 'Signed out'}</span>
+      </>
+    ),
+  },
   {
     id: 'entity',
     header: 'Record',

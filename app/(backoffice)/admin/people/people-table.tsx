@@ -18,14 +18,19 @@ const COLUMNS: ColumnDef<PersonRow, unknown>[] = [
     cell: ({ row }) => (
       <Link href={`/admin/people/${row.original.id}`} className="inline-flex min-h-touch flex-col justify-center font-medium text-copper-dark underline-offset-4 hover:underline">
         {row.original.name ?? '(no name)'}
-        <span className="text-sm font-normal text-ink-soft sm:hidden">{row.original.email}</span>
+        {/* Phones have room for one column: the rest of the row goes under the name. */}
+        <span className="break-all text-sm font-normal text-ink-soft sm:hidden">{row.original.email}</span>
+        <span className="mt-1 flex flex-wrap items-center gap-2 text-sm font-normal text-ink sm:hidden">
+          {ROLE_LABELS[row.original.role]}
+          <AccountStateBadge state={accountState(row.original)} />
+        </span>
       </Link>
     ),
   },
   { id: 'email', header: 'E-mail', cell: ({ row }) => <span className="break-all">{row.original.email}</span>, meta: { className: 'hidden sm:table-cell' } },
-  { id: 'role', header: 'Role', cell: ({ row }) => ROLE_LABELS[row.original.role] },
+  { id: 'role', header: 'Role', cell: ({ row }) => ROLE_LABELS[row.original.role], meta: { className: 'hidden sm:table-cell' } },
   { id: 'business', header: 'Business', cell: ({ row }) => row.original.business ?? '—', meta: { className: 'hidden md:table-cell' } },
-  { id: 'state', header: 'State', cell: ({ row }) => <AccountStateBadge state={accountState(row.original)} /> },
+  { id: 'state', header: 'State', cell: ({ row }) => <AccountStateBadge state={accountState(row.original)} />, meta: { className: 'hidden sm:table-cell' } },
   { id: 'created', header: 'Joined', cell: ({ row }) => <span className="figures whitespace-nowrap">{formatDate(row.original.createdAt)}</span>, meta: { className: 'hidden md:table-cell' } },
 ];
 
