@@ -9,3 +9,4 @@ export * from './market';
 export * from './audit';
 export * from './outbox';
 export * from './shortlists';
+export * from './comparison-entries';

@@ -1,0 +1,64 @@
+import { decimal, index, int, mysqlEnum, mysqlTable, smallint, varchar } from 'drizzle-orm/mysql-core';
+import { minorUnits, timestamp } from './columns';
+import { LATHE_KINDS } from './machines';
+import { CONDITION_GRADES } from './reports';
+
+const subsystemScore = (key: string) => smallint(`${key}_score`);
+const subsystemGrade = (key: string) => mysqlEnum(`${key}_grade`, CONDITION_GRADES);
+
+/**
+ * The dealers' comparison table, one narrow row per current released report: the machine's listing
+ * figures, the report's summary and its eight subsystem grades side by side. Kept by database
+ * triggers on reports, machines and report_subsystem_scores (see the migration), so every path that
+ * releases, corrects or withdraws a report keeps it right. It exists because a report row carries its
+ * full scoring result (tens of KB): filtering and counting 10,000 of those through a join was the
+ * slow part of the table, while this row is about 200 bytes.
+ */
+export const comparisonEntries = mysqlTable(
+  'comparison_entries',
+  {
+    reportId: int('report_id').primaryKey(),
+    inspectionId: int('inspection_id').notNull(),
+    machineId: int('machine_id').notNull(),
+    maker: varchar('maker', { length: 120 }).notNull(),
+    model: varchar('model', { length: 120 }).notNull(),
+    latheKind: mysqlEnum('lathe_kind', LATHE_KINDS).notNull(),
+    swingMm: smallint('swing_mm').notNull(),
+    betweenCentresMm: smallint('between_centres_mm').notNull(),
+    yearBuilt: smallint('year_built'),
+    town: varchar('town', { length: 120 }).notNull(),
+    region: varchar('region', { length: 120 }).notNull(),
+    askingPriceMinor: minorUnits('asking_price_minor'),
+    priceCurrency: varchar('price_currency', { length: 3 }).notNull(),
+    overallCondition: mysqlEnum('overall_condition', CONDITION_GRADES).notNull(),
+    overallScore: smallint('overall_score').notNull(),
+    confidence: decimal('confidence', { precision: 4, scale: 3 }).notNull(),
+    fairMarketValueMinor: minorUnits('fair_market_value_minor'),
+    repairEstimateMinor: minorUnits('repair_estimate_minor'),
+    valueCurrency: varchar('value_currency', { length: 3 }).notNull(),
+    releasedAt: timestamp('released_at'),
+    bedScore: subsystemScore('bed'),
+    bedGrade: subsystemGrade('bed'),
+    spindleScore: subsystemScore('spindle'),
+    spindleGrade: subsystemGrade('spindle'),
+    gearboxScore: subsystemScore('gearbox'),
+    gearboxGrade: subsystemGrade('gearbox'),
+    slidesScore: subsystemScore('slides'),
+    slidesGrade: subsystemGrade('slides'),
+    tailstockScore: subsystemScore('tailstock'),
+    tailstockGrade: subsystemGrade('tailstock'),
+    driveScore: subsystemScore('drive'),
+    driveGrade: subsystemGrade('drive'),
+    electricalScore: subsystemScore('electrical'),
+    electricalGrade: subsystemGrade('electrical'),
+    accessoriesScore: subsystemScore('accessories'),
+    accessoriesGrade: subsystemGrade('accessories'),
+  },
+  (t) => [
+    // The default order (best condition first) and the newest-first order read these in order and stop at the page.
+    index('comparison_entries_score_idx').on(t.overallScore),
+    index('comparison_entries_released_idx').on(t.releasedAt),
+    index('comparison_entries_machine_idx').on(t.machineId),
+    index('comparison_entries_inspection_idx').on(t.inspectionId),
+  ],
+);
