@@ -83,12 +83,26 @@ export function mayTransition(role: Role, from: InspectionStatus, to: Inspection
 
 /** Navigation of the signed-in area by role: only pages that exist. */
 export const ROLE_NAVIGATION: Record<Role, ReadonlyArray<{ href: string; label: string }>> = {
-  seller: [{ href: '/dashboard', label: 'Overview' }],
+  seller: [
+    { href: '/dashboard', label: 'Overview' },
+    { href: '/purchases', label: 'Downloads' },
+  ],
   inspector: [{ href: '/dashboard', label: 'Overview' }, { href: '/jobs', label: 'My jobs' }],
-  buyer: [{ href: '/dashboard', label: 'Overview' }],
-  dealer: [{ href: '/dashboard', label: 'Overview' }],
+  buyer: [
+    { href: '/dashboard', label: 'Overview' },
+    { href: '/reports', label: 'Reports' },
+    { href: '/purchases', label: 'Purchases' },
+  ],
+  dealer: [
+    { href: '/dashboard', label: 'Overview' },
+    { href: '/reports', label: 'Reports' },
+    { href: '/purchases', label: 'Purchases' },
+  ],
   admin: [
     { href: '/dashboard', label: 'Overview' },
+    { href: '/reports', label: 'Reports' },
+    { href: '/admin/orders', label: 'Orders' },
+    { href: '/admin/fees', label: 'Fees' },
     { href: '/admin/people', label: 'People' },
     { href: '/admin/audit', label: 'Audit log' },
   ],
