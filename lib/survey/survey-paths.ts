@@ -1,6 +1,6 @@
 /**
  * Reading and writing one value deep inside the survey without mutating it. Clearing a value
- * removes its key, and a group left empty is removed too, so a cleared reading is "not measured",
+ * removes its key, and a group or list left empty is removed too, so a cleared reading is "not measured",
  * never an empty object the format would refuse.
  */
 export type SurveyPath = readonly (string | number)[];
@@ -15,7 +15,7 @@ export function getAt(root: unknown, path: SurveyPath): unknown {
 }
 
 function isEmptyGroup(value: unknown) {
-  return value !== null && typeof value === 'object' && !Array.isArray(value) && Object.keys(value).length === 0;
+  return value !== null && typeof value === 'object' && Object.keys(value).length === 0;
 }
 
 export function setAt<T>(root: T, path: SurveyPath, value: unknown): T {

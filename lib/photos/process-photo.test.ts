@@ -1,0 +1,22 @@
+import sharp from 'sharp';
+import { describe, expect, it } from 'vitest';
+import { NotAPhotoError, processPhoto } from './process-photo';
+
+describe('processPhoto', () => {
+  it('shrinks a large photo to the display and thumbnail sizes, never enlarging a small one', async () => {
+    const large = await sharp({ create: { width: 4000, height: 3000, channels: 3, background: '#777' } }).png().toBuffer();
+    const done = await processPhoto(large);
+    expect([done.display.widthPx, done.display.heightPx]).toEqual([1600, 1200]);
+    expect([done.thumb.widthPx, done.thumb.heightPx]).toEqual([320, 240]);
+    const small = await processPhoto(await sharp({ create: { width: 200, height: 100, channels: 3, background: '#777' } }).jpeg().toBuffer());
+    expect([small.display.widthPx, small.display.heightPx]).toEqual([200, 100]);
+  });
+
+  it.each([
+    ['plain text named like a photo', Buffer.from('not a photo at all')],
+    ['a PDF', Buffer.from('%PDF-1.7\n1 0 obj << >> endobj\n')],
+    ['an empty file', Buffer.alloc(0)],
+  ])('refuses %s', async (_what, bytes) => {
+    await expect(processPhoto(bytes)).rejects.toBeInstanceOf(NotAPhotoError);
+  });
+});
