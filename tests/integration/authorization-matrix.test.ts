@@ -25,7 +25,8 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { and, count, eq, gt } from 'drizzle-orm';
 import { NextRequest } from 'next/server';
 import { closeDatabase, db } from '@/db/client';
-import { auditEvents, inspections, machines, users } from '@/db/schema';
+import { auditEvents, inspections, machines, reportAccessGrants, reports, users } from '@/db/schema';
+import { ERROR_CODES } from '@/lib/errors';
 import { ROLES, type Role } from '@/db/schema/users';
 import type { InspectionStatus } from '@/db/schema/inspections';
 import type { Actor } from '@/lib/auth/operation';
@@ -54,8 +55,13 @@ type Input = (c: Context) => unknown | Promise<unknown>;
 type HttpCall = { url: string; method?: string; body?: unknown; params: Record<string, string> };
 
 type Rule =
-  /** A server action or routeHandler route: called as every subject. */
-  | { kind: 'action'; allowed: readonly Subject[]; input: Input; others?: { allowed: readonly Subject[]; input: Input } }
+  /**
+   * A server action or routeHandler route: called as every subject. `form: true` for actions used
+   * with useActionState, called as (previousState, FormData) like React calls them.
+   */
+  | { kind: 'action'; allowed: readonly Subject[]; input: Input; form?: boolean; others?: { allowed: readonly Subject[]; input: Input } }
+  /** A webhook authenticated by its signature alone: refused without one, whoever's session comes along. */
+  | { kind: 'signed'; request: (c: Context) => HttpCall | Promise<HttpCall>; why: string }
   | { kind: 'route'; allowed: readonly Subject[]; request: (c: Context) => HttpCall | Promise<HttpCall>; others?: { allowed: readonly Subject[]; request: (c: Context) => HttpCall | Promise<HttpCall> } }
   /** A third-party protocol handler whose authorisation is one of our operations: that operation is called as every subject. */
   | { kind: 'delegated'; allowed: readonly Subject[]; operation: () => Promise<{ execute: (actor: Actor | null, raw: unknown) => Promise<{ ok: boolean; code?: string }> }>; input: Input; why: string }
@@ -100,6 +106,20 @@ async function invitedUser() {
   const account = await createAccount('inspector');
   await db.update(users).set({ passwordHash: null, emailVerified: null }).where(eq(users.id, account.id));
   return account.id;
+}
+
+/**
+ * Released reports of two different inspections from the demo data: the first is granted to the
+ * acting account, the second never is (a grant covers every version of one inspection's report).
+ */
+async function releasedReport(which: 'granted' | 'never-granted', grantTo?: TestAccount | null) {
+  const released = await db.select({ id: reports.id, inspectionId: reports.inspectionId }).from(reports).where(eq(reports.status, 'released')).orderBy(reports.id);
+  const first = released[0];
+  const other = released.find((report) => report.inspectionId !== first?.inspectionId);
+  if (!first || !other) throw new Error('The matrix needs released reports of two inspections (the demo seed has several)');
+  if (which === 'never-granted') return other.id;
+  if (grantTo) await db.insert(reportAccessGrants).values({ reportId: first.id, userId: grantTo.id, reason: 'purchase' });
+  return first.id;
 }
 
 const tokenFor = (purpose: 'verify_email' | 'reset_password' | 'invitation', userId: string) => issueToken(db, userId, purpose);
@@ -240,6 +260,32 @@ const RULES: Record<string, Rule> = {
       },
     },
   },
+  // Payments and reports.
+  // Fee and refund inputs are deliberately refused by validation for a coordinator (no real fee or
+  // order changes); validation comes after the role check, so the role is still what is judged.
+  'app/(backoffice)/admin/fees/actions.ts#saveFeeAction': { kind: 'action', form: true, allowed: ['admin'], input: () => ({ sizeClass: 'medium', amount: '-1' }) },
+  'app/(backoffice)/admin/orders/actions.ts#refundOrderAction': { kind: 'action', form: true, allowed: ['admin'], input: () => ({ orderId: '999999999', reason: 'x' }) },
+  'app/(backoffice)/reports/[id]/actions.ts#buyReportAction': { kind: 'action', form: true, allowed: ['buyer', 'dealer'], input: () => ({ reportId: '999999999' }) },
+  'app/api/reports/[id]/pdf/route.ts#GET': {
+    kind: 'route',
+    allowed: SIGNED_IN,
+    request: async (c) => {
+      const id = await releasedReport('granted', c.actor);
+      return { url: `/api/reports/${id}/pdf`, params: { id: String(id) } };
+    },
+    others: {
+      allowed: ['admin'],
+      request: async () => {
+        const id = await releasedReport('never-granted');
+        return { url: `/api/reports/${id}/pdf`, params: { id: String(id) } };
+      },
+    },
+  },
+  'app/api/payments/webhook/route.ts#POST': {
+    kind: 'signed',
+    why: "the payment provider's signature over the body is the only credential; services/payments and the payment tests cover signed events",
+    request: () => ({ url: '/api/payments/webhook', method: 'POST', body: { id: 'evt_forged', type: 'checkout.session.completed' }, params: {} }),
+  },
   'app/api/uploadthing/route.ts#GET': {
     kind: 'delegated',
     allowed: ['inspector'],
@@ -310,20 +356,37 @@ async function deniedAuditCount(actor: Actor | null) {
 }
 
 /** Runs one call as `actor` and decides whether authorisation let it through. */
-async function judge(actor: Actor | null, call: () => Promise<{ status?: number; code?: string; ok?: boolean }>): Promise<Verdict> {
+async function judge(actor: Actor | null, call: () => Promise<{ status?: number; code?: string; ok?: boolean; message?: string }>): Promise<Verdict> {
   session.actor = actor;
   session.ip = someIp();
   const before = await deniedAuditCount(actor);
-  const outcome = await call();
-  const code = outcome.code ?? (outcome.status === 401 ? 'unauthenticated' : outcome.status === 403 ? 'forbidden' : outcome.status === 404 ? 'not_found' : undefined);
+  let outcome: { status?: number; code?: string; ok?: boolean; message?: string };
+  try {
+    outcome = await call();
+  } catch (error) {
+    // redirect() from an action (e.g. on to checkout) means the action went through.
+    if (String((error as { digest?: unknown })?.digest ?? '').startsWith('NEXT_REDIRECT')) return 'allowed';
+    throw error;
+  }
+  // Form-state actions pass on only the message: map the wrapper's refusal messages back to codes.
+  const fromMessage = (['unauthenticated', 'forbidden'] as const).find((c) => outcome.message === ERROR_CODES[c].message);
+  const code =
+    outcome.code ?? fromMessage ?? (outcome.status === 401 ? 'unauthenticated' : outcome.status === 403 ? 'forbidden' : outcome.status === 404 ? 'not_found' : undefined);
   if (code === 'unauthenticated' || code === 'forbidden') return 'refused';
-  if (code === 'not_found' && (await deniedAuditCount(actor)) > before) return 'refused';
+  // Ownership refusals (and role refusals of form-state actions) leave a "denied" audit event.
+  if ((code === 'not_found' || code === undefined) && (await deniedAuditCount(actor)) > before) return 'refused';
   return 'allowed';
 }
 
-async function callAction(endpoint: Endpoint, input: unknown) {
-  const loaded = (await import(/* @vite-ignore */ endpoint.file)) as Record<string, (input: unknown) => Promise<{ ok: boolean; code?: string }>>;
-  return loaded[endpoint.name]!(input);
+function formDataOf(input: unknown) {
+  const form = new FormData();
+  for (const [key, value] of Object.entries(input as Record<string, unknown>)) form.set(key, String(value));
+  return form;
+}
+
+async function callAction(endpoint: Endpoint, input: unknown, form = false) {
+  const loaded = (await import(/* @vite-ignore */ endpoint.file)) as Record<string, (...args: unknown[]) => Promise<{ ok?: boolean; code?: string; message?: string }>>;
+  return form ? loaded[endpoint.name]!({}, formDataOf(input)) : loaded[endpoint.name]!(input);
 }
 
 async function callRoute(endpoint: Endpoint, call: HttpCall) {
@@ -377,6 +440,19 @@ describe('the authorisation matrix', () => {
   for (const endpoint of ENDPOINTS) {
     const rule = RULES[endpoint.key];
     if (!rule || rule.kind === 'auth-library' || rule.kind === 'inline') continue;
+    if (rule.kind === 'signed') {
+      describe(endpoint.key, () => {
+        for (const subject of SUBJECTS) {
+          it(`refuses an unsigned request ${subject === 'signed-out' ? 'signed out' : `from a ${subject}`}`, async () => {
+            const actor = subjectActor(subject);
+            session.actor = actor?.actor ?? null;
+            const response = await callRoute(endpoint, await rule.request({ actor, fx }));
+            expect(response.status).toBe(400);
+          });
+        }
+      });
+      continue;
+    }
     describe(endpoint.key, () => {
       for (const subject of SUBJECTS) {
         const expected: Verdict = rule.allowed.includes(subject) ? 'allowed' : 'refused';
@@ -385,7 +461,7 @@ describe('the authorisation matrix', () => {
           const c: Context = { actor, fx };
           const verdict =
             rule.kind === 'action'
-              ? await judge(actor?.actor ?? null, async () => callAction(endpoint, await rule.input(c)))
+              ? await judge(actor?.actor ?? null, async () => callAction(endpoint, await rule.input(c), rule.form))
               : rule.kind === 'route'
                 ? await judge(actor?.actor ?? null, async () => callRoute(endpoint, await rule.request(c)))
                 : await judge(actor?.actor ?? null, async () => (await rule.operation()).execute(actor?.actor ?? null, await rule.input(c)));
@@ -401,7 +477,7 @@ describe('the authorisation matrix', () => {
             const c: Context = { actor, fx };
             const verdict =
               rule.kind === 'action' && 'input' in others
-                ? await judge(actor?.actor ?? null, async () => callAction(endpoint, await others.input(c)))
+                ? await judge(actor?.actor ?? null, async () => callAction(endpoint, await others.input(c), rule.form))
                 : await judge(actor?.actor ?? null, async () => callRoute(endpoint, await (others as { request: (c: Context) => Promise<HttpCall> }).request(c)));
             expect(verdict).toBe(expected);
           });
