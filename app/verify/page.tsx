@@ -7,7 +7,9 @@ export const metadata: Metadata = { title: 'Check a report' };
 
 async function lookUp(formData: FormData) {
   'use server';
-  const code = String(formData.get('code') ?? '').trim().toUpperCase();
+  // Codes are read aloud and retyped: spaces are dropped and missing dashes put back.
+  const typed = String(formData.get('code') ?? '').replace(/\s+/g, '').toUpperCase();
+  const code = /^WG[0-9A-Z]{12}$/.test(typed) ? `WG-${typed.slice(2, 6)}-${typed.slice(6, 10)}-${typed.slice(10)}` : typed;
   redirect(`/verify/${encodeURIComponent(code || '-')}`);
 }
 

@@ -13,6 +13,8 @@ export async function findReportByVerificationCode(code: string) {
       status: reports.status,
       releasedAt: reports.releasedAt,
       withdrawnAt: reports.withdrawnAt,
+      // Open to everyone in the catalogue too; the checks, photos and values are not.
+      overallCondition: reports.overallCondition,
       maker: machines.maker,
       model: machines.model,
       serialNumber: machines.serialNumber,
@@ -23,7 +25,7 @@ export async function findReportByVerificationCode(code: string) {
     .limit(1);
   if (!row) return null;
   const [newest] = await db
-    .select({ version: reports.version, releasedAt: reports.releasedAt })
+    .select({ version: reports.version, releasedAt: reports.releasedAt, verificationCode: reports.verificationCode })
     .from(reports)
     .where(and(eq(reports.inspectionId, row.inspectionId), eq(reports.status, 'released')))
     .orderBy(desc(reports.version))
