@@ -11,7 +11,8 @@ import type { RepairCostCatalogue } from './repair/cost-catalogue';
 import { defaultRepairCostCatalogue } from './repair/default-repair-cost-catalogue';
 import { estimateRepairs } from './repair/repair-estimate';
 import type { MachineSummary, ScoringResult } from './result';
-import { latheSurveySchema, type LatheSurvey, type ParsedLatheSurvey } from './survey/lathe-survey';
+import { compiledLatheSurveySchema } from './survey/compiled-survey-schema';
+import type { LatheSurvey, ParsedLatheSurvey } from './survey/lathe-survey';
 import { toMillimetres } from './units/length';
 import { defaultValuationTables, type ValuationTables } from './valuation/valuation-tables';
 import type { ComparableSale } from './valuation/valuation-types';
@@ -39,7 +40,7 @@ export const REPORT_NOTICES: readonly string[] = [
 ];
 
 export function safeScoreSurvey(survey: unknown, options: ScoreOptions = {}): SafeScoreResult {
-  const parsed = latheSurveySchema.safeParse(survey);
+  const parsed = compiledLatheSurveySchema.safeParse(survey);
   if (!parsed.success) return { ok: false, issues: issuesFromZod(parsed.error) };
   return { ok: true, result: scoreParsedSurvey(parsed.data, options) };
 }
