@@ -16,6 +16,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'unit',
+          setupFiles: ['tests/support/unit-env.ts'],
           include: ['lib/**/*.test.ts', 'services/**/*.test.ts', 'components/**/*.test.ts', 'db/**/*.test.ts'],
           environment: 'node',
         },

@@ -36,7 +36,7 @@ describe('the inspection workflow', () => {
     const machineId = await createMachine(seller.id);
     const request = { machineId, preferredDates: [inDays(5)], siteContactName: 'Gwen', siteContactPhone: '+00 555 0101' };
     const first = await requestInspection.execute(seller.actor, request);
-    expect(first.ok).toBe(true);
+    expect(first).toMatchObject({ ok: true });
     const second = await requestInspection.execute(seller.actor, request);
     expect(second).toMatchObject({ ok: false, code: 'conflict' });
   });
@@ -53,7 +53,7 @@ describe('the inspection workflow', () => {
     const [seller, coordinator, inspector] = await Promise.all([createAccount('seller'), createAccount('admin'), createAccount('inspector')]);
     const inspectionId = await createInspection(await createMachine(seller.id), seller.id, 'requested');
     const result = await bookInspection.execute(coordinator.actor, { inspectionId, inspectorId: inspector.id, date: inDays(6), time: '09:30', feeEuros: 390 });
-    expect(result.ok).toBe(true);
+    expect(result).toMatchObject({ ok: true });
     const [row] = await db.select().from(inspections).where(eq(inspections.id, inspectionId));
     expect(row).toMatchObject({ status: 'booked', inspectorId: inspector.id, feeMinor: 39_000 });
     expect(row!.scheduledAt!.toISOString()).toBe(`${inDays(6)}T09:30:00.000Z`);
@@ -84,7 +84,7 @@ describe('the inspection workflow', () => {
     const [seller, inspector] = await Promise.all([createAccount('seller'), createAccount('inspector')]);
     const machineId = await createMachine(seller.id);
     const booked = await createInspection(machineId, seller.id, 'booked', inspector.id);
-    expect((await cancelInspection.execute(seller.actor, { inspectionId: booked, reason: 'Sold privately' })).ok).toBe(true);
+    expect(await cancelInspection.execute(seller.actor, { inspectionId: booked, reason: 'Sold privately' })).toMatchObject({ ok: true });
     expect(await statusOf(booked)).toBe('cancelled');
     expect(await mailsTo(inspector.email, 'inspection-cancelled')).toHaveLength(1);
 
@@ -100,7 +100,7 @@ describe('the inspection workflow', () => {
     const refused = await sendSurveyBack.execute(coordinator.actor, { inspectionId, reportId: 1, comment: '' });
     expect(refused).toMatchObject({ ok: false, code: 'invalid_input' });
     const result = await sendSurveyBack.execute(coordinator.actor, { inspectionId, reportId: 1, comment: 'Repeat the level run with the stand unloaded' });
-    expect(result.ok).toBe(true);
+    expect(result).toMatchObject({ ok: true });
     expect(await statusOf(inspectionId)).toBe('on_site');
     expect(await mailsTo(inspector.email, 'survey-returned')).toHaveLength(1);
   });
@@ -126,10 +126,10 @@ describe('the inspection workflow', () => {
     const [seller, coordinator, inspector, buyer] = await Promise.all([createAccount('seller'), createAccount('admin'), createAccount('inspector'), createAccount('buyer')]);
     const inspectionId = await createInspection(await createMachine(seller.id), seller.id, 'in_review', inspector.id);
     const first = await createSubmittedSurvey(inspectionId);
-    expect((await releaseReport.execute(coordinator.actor, { inspectionId, reportId: first.reportId })).ok).toBe(true);
+    expect(await releaseReport.execute(coordinator.actor, { inspectionId, reportId: first.reportId })).toMatchObject({ ok: true });
     await db.insert(reportAccessGrants).values({ reportId: first.reportId, userId: buyer.id, reason: 'purchase' });
 
-    expect((await reopenForCorrection.execute(coordinator.actor, { inspectionId, comment: 'Serial number was misread' })).ok).toBe(true);
+    expect(await reopenForCorrection.execute(coordinator.actor, { inspectionId, comment: 'Serial number was misread' })).toMatchObject({ ok: true });
     expect(await statusOf(inspectionId)).toBe('on_site');
     await db.update(inspections).set({ status: 'in_review' }).where(eq(inspections.id, inspectionId));
     const { reportId: secondId, version } = await db.transaction(async (tx) => {
@@ -138,7 +138,7 @@ describe('the inspection workflow', () => {
       return insertDraftReport(tx, { inspectionId, machineId: v1!.machineId, surveyVersion: 6, inspectorId: inspector.id, result: v1!.result as never });
     });
     expect(version).toBe(2);
-    expect((await releaseReport.execute(coordinator.actor, { inspectionId, reportId: secondId })).ok).toBe(true);
+    expect(await releaseReport.execute(coordinator.actor, { inspectionId, reportId: secondId })).toMatchObject({ ok: true });
 
     const [v1] = await db.select().from(reports).where(eq(reports.id, first.reportId));
     expect(v1).toMatchObject({ status: 'released', supersededById: secondId });
