@@ -72,6 +72,8 @@ export const STATUS_TRANSITIONS: ReadonlyArray<{ from: InspectionStatus; to: Ins
   { from: 'on_site', to: 'in_review', roles: ['inspector'] },
   { from: 'in_review', to: 'on_site', roles: ['admin'] },
   { from: 'in_review', to: 'released', roles: ['admin'] },
+  // A released report is corrected by reopening the survey; the correction is released as a new version.
+  { from: 'released', to: 'on_site', roles: ['admin'] },
   { from: 'requested', to: 'cancelled', roles: ['seller', 'admin'] },
   { from: 'booked', to: 'cancelled', roles: ['seller', 'admin'] },
   { from: 'on_site', to: 'cancelled', roles: ['admin'] },
@@ -85,6 +87,7 @@ export function mayTransition(role: Role, from: InspectionStatus, to: Inspection
 export const ROLE_NAVIGATION: Record<Role, ReadonlyArray<{ href: string; label: string }>> = {
   seller: [
     { href: '/dashboard', label: 'Overview' },
+    { href: '/machines', label: 'Machines' },
     { href: '/purchases', label: 'Downloads' },
   ],
   inspector: [{ href: '/dashboard', label: 'Overview' }, { href: '/jobs', label: 'My jobs' }],
@@ -100,6 +103,7 @@ export const ROLE_NAVIGATION: Record<Role, ReadonlyArray<{ href: string; label: 
   ],
   admin: [
     { href: '/dashboard', label: 'Overview' },
+    { href: '/inspections', label: 'Inspections' },
     { href: '/reports', label: 'Reports' },
     { href: '/admin/orders', label: 'Orders' },
     { href: '/admin/fees', label: 'Fees' },
