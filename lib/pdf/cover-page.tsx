@@ -15,7 +15,7 @@ function money(m: Money | null | undefined) {
 
 function Fact({ label, value, width }: { label: string; value: string; width: string }) {
   return (
-    <View style={{ width, marginBottom: 7 }}>
+    <View style={{ width, marginBottom: 5 }}>
       <Text style={styles.factLabel}>{label}</Text>
       <Text style={styles.factValue}>{value}</Text>
     </View>
@@ -52,7 +52,7 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
           .join(' · ')}
       </Text>
 
-      <View style={{ flexDirection: 'row', marginTop: 16 }}>
+      <View style={{ flexDirection: 'row', marginTop: 12 }}>
         <View style={{ ...styles.panel, flexGrow: 1, flexBasis: 0, marginRight: 10, borderLeftWidth: 3, borderLeftColor: gradeColour(grade) }}>
           <Text style={styles.factLabel}>Overall condition</Text>
           <Text style={{ fontSize: 26, fontWeight: 600, color: gradeColour(grade), lineHeight: 1.15 }}>{grade ?? 'Not graded'}</Text>
@@ -109,7 +109,7 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
 
       <Text style={styles.h3}>Subsystems</Text>
       {r.subsystems.map((s) => (
-        <View key={s.id} wrap={false} style={{ flexDirection: 'row', alignItems: 'center', paddingVertical: 3.5, ...styles.rule }}>
+        <View key={s.id} wrap={false} style={{ flexDirection: 'row', alignItems: 'center', paddingVertical: 2.5, ...styles.rule }}>
           <Text style={{ width: 150 }}>{s.label}</Text>
           <View style={{ width: 150, height: 6, backgroundColor: COLOURS.paperSunken, marginRight: 10 }}>
             <View style={{ width: `${Math.max(0, Math.min(100, s.score ?? 0))}%`, height: 6, backgroundColor: gradeColour(s.grade) }} />
@@ -122,6 +122,7 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
         </View>
       ))}
 
+      <View wrap={false}>
       <Text style={styles.h3}>This document</Text>
       <View style={{ flexDirection: 'row', flexWrap: 'wrap' }}>
         <Fact width="25%" label="Report" value={`No. ${data.reportId}, version ${data.version}`} />
@@ -131,6 +132,7 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
         <Fact width="25%" label="Released on" value={data.releasedAt ? formatDate(data.releasedAt) : 'draft, not released'} />
         <Fact width="25%" label="Verification code" value={data.verificationCode} />
         <Fact width="50%" label="Check this document is genuine and current at" value={data.verificationUrl} />
+      </View>
       </View>
     </FramedPage>
   );

@@ -62,7 +62,7 @@ export function FramedPage({
       {continuedTitle ? (
         <Text
           fixed
-          style={{ position: 'absolute', top: 44, left: PAGE.marginX, ...styles.eyebrow }}
+          style={{ position: 'absolute', top: 47, left: PAGE.marginX, ...styles.eyebrow }}
           render={({ subPageNumber }) => (subPageNumber > 1 ? `${continuedTitle}, continued` : '')}
         />
       ) : null}

@@ -16,7 +16,7 @@ function qRange(index: number) {
 /** Page 2: how the grades are reached, what must be fixed first, and what was not measured. */
 export function ReadingGuidePage({ result, frame }: { result: ScoringResult; frame: FrameFacts }) {
   return (
-    <FramedPage frame={frame} bookmark="Reading this report">
+    <FramedPage frame={frame} bookmark="Reading this report" continuedTitle="Reading this report">
       <SectionHeading
         eyebrow="Reading this report"
         title="How the grades are reached"
@@ -75,7 +75,11 @@ export function ReadingGuidePage({ result, frame }: { result: ScoringResult; fra
       <Text style={styles.h3}>Confidence: {Math.round(result.confidence.value * 100)} %</Text>
       <Text>{pdfText(result.confidence.explanation)}</Text>
       {result.confidence.missing.length > 0 ? (
-        <View style={{ marginTop: 4 }}>
+        <View style={{ marginTop: 6 }}>
+          <View style={{ flexDirection: 'row', paddingBottom: 2, borderBottomWidth: 1, borderBottomColor: COLOURS.lineStrong }}>
+            <Text style={{ width: '55%', fontSize: 7.5, fontWeight: 600, color: COLOURS.inkSoft }}>Not measured, heaviest first</Text>
+            <Text style={{ width: '45%', fontSize: 7.5, fontWeight: 600, color: COLOURS.inkSoft }}>Why not, as the inspector recorded it</Text>
+          </View>
           {result.confidence.missing.map((m) => (
             <View key={m.checkId} wrap={false} style={{ flexDirection: 'row', paddingVertical: 2, ...styles.rule }}>
               <Text style={{ width: '55%' }}>{pdfText(m.label)}</Text>

@@ -1,6 +1,7 @@
 import 'server-only';
 import { findReportForDocument } from '@/db/queries/report-document';
 import { env } from '@/lib/env';
+import { publicFileUrl } from '@/lib/storage/file-url';
 import { AppError } from '@/lib/errors';
 import { loadReportPhotos } from './load-report-photos';
 import { pdfCache } from './pdf-cache';
@@ -23,7 +24,11 @@ export async function reportPdf(reportId: number, cache = pdfCache()): Promise<{
     const cached = await cache.get(report.id, report.version);
     if (cached) return { pdf: cached, fromCache: true };
   }
-  const { photos, complete } = await loadReportPhotos(report.photos.map((p) => ({ section: p.section, caption: p.caption, url: p.originalUrl })));
+  // The display size (about screen width) prints sharply at the photo's size on the page; the
+  // original can be many megabytes.
+  const { photos, complete } = await loadReportPhotos(
+    report.photos.map((p) => ({ section: p.section, caption: p.caption, url: p.displayKey ? publicFileUrl(p.displayKey) : p.originalUrl })),
+  );
   const data: ReportDocumentData = {
     reportId: report.id,
     version: report.version,
