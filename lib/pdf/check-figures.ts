@@ -21,6 +21,8 @@ export function isPhysical(check: Pick<CheckResult, 'measured'>) {
 export function measuredText(check: CheckResult): { main: string; note: string | null } {
   if (!check.measured) return { main: '—', note: null };
   if (isPhysical(check)) return { main: formatQuantity(check.measured.value, check.measured.unit), note: check.measured.text ? pdfText(check.measured.text) : null };
+  // Accessories are listed by their survey ids ("three-jaw-chuck"); printed as words.
+  if (check.measured.unit === 'items') return { main: pdfText((check.measured.text ?? '').replaceAll('-', ' ')), note: `${check.measured.value} items` };
   const rating = check.measured.unit.startsWith('rating') ? `${check.measured.unit.replace(/ 0–3$/, '')} ${check.measured.value} of 3` : null;
   return { main: pdfText(check.measured.text ?? `${check.measured.value} ${check.measured.unit}`), note: rating };
 }
@@ -33,13 +35,13 @@ function shortRule(basis: string) {
 }
 
 /** The permissible value with its unit, or the rule for a rating; `basis` says how the value was found. */
-export function permissibleText(check: CheckResult): { main: string; basis: string | null } {
+export function permissibleText(check: CheckResult): { main: string; basis: string | null; isFigure: boolean } {
   const p = check.permissible;
-  if (!p) return { main: '—', basis: null };
+  if (!p) return { main: '—', basis: null, isFigure: false };
   // A basis that only repeats the value ("0.01 mm") adds nothing beside the figure.
   const repeatsValue = p.basis === `${p.value} ${p.unit}`;
-  if (isPhysical(check)) return { main: formatQuantity(p.value, p.unit), basis: repeatsValue ? null : pdfText(p.basis) };
-  return { main: pdfText(shortRule(p.basis)), basis: null };
+  if (isPhysical(check)) return { main: formatQuantity(p.value, p.unit), basis: repeatsValue ? null : pdfText(p.basis), isFigure: true };
+  return { main: pdfText(shortRule(p.basis)), basis: null, isFigure: false };
 }
 
 /** q = measured deviation / permissible, two decimals. */

@@ -52,7 +52,7 @@ export function CheckTable({ checks }: { checks: readonly CheckResult[] }) {
               {measured.note ? <Text style={{ ...styles.small, fontSize: 7, textAlign: 'right' }}>{measured.note}</Text> : null}
             </View>
             <View style={{ width: COLUMNS.permissible, paddingRight: 6 }}>
-              <Text style={{ textAlign: 'right', ...styles.figures, ...(permissible.basis ? {} : { fontSize: 8 }) }}>{permissible.main}</Text>
+              <Text style={{ textAlign: 'right', ...styles.figures, ...(permissible.isFigure ? {} : { fontSize: 8 }) }}>{permissible.main}</Text>
             </View>
             <Text style={{ width: COLUMNS.q, textAlign: 'right', paddingRight: 6, ...styles.figures }}>{ratioText(check)}</Text>
             <View style={{ width: COLUMNS.band, paddingTop: 1.5 }}>
