@@ -19,6 +19,22 @@ describe('money', () => {
     }
   });
 
+  it('groups thousands exactly as the digit pattern does, for every length of amount', () => {
+    const byPattern = (minor: number, minorDigits: number) => {
+      const digits = String(Math.abs(Math.round(minor))).padStart(minorDigits + 1, '0');
+      const whole = digits.slice(0, digits.length - minorDigits).replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+      const fraction = digits.slice(digits.length - minorDigits);
+      return `${minor < 0 ? '−' : ''}EUR ${whole}${minorDigits ? `.${fraction}` : ''}`;
+    };
+    for (let magnitude = 1; magnitude < 1e25; magnitude *= 10) {
+      for (const minor of [magnitude, magnitude * 1.234567, -magnitude * 9.87654321 - 1]) {
+        for (const minorDigits of [0, 2, 3]) {
+          expect(formatMoney({ amountMinor: minor, currency: 'EUR' }, minorDigits)).toBe(byPattern(minor, minorDigits));
+        }
+      }
+    }
+  });
+
   it('rounds a product half away from zero to whole minor units', () => {
     expect(multiplyMoney({ amountMinor: 5, currency: 'EUR' }, 0.5).amountMinor).toBe(3);
     expect(multiplyMoney({ amountMinor: -5, currency: 'EUR' }, 0.5).amountMinor).toBe(-3);

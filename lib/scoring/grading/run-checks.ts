@@ -1,9 +1,19 @@
-import { isNotMeasured, type CheckDefinition } from '../check-definition';
+import { isNotMeasured, type CheckDefinition, type CheckEvaluation } from '../check-definition';
 import type { CheckResult } from '../result';
 import { describeSource } from '../source-marks';
 import { bandFor } from './bands';
 import { checkScore } from './check-score';
+import { notMeasuredText } from './not-measured-text';
 import { roundTo } from '../format-number';
+
+/**
+ * The figures shown beside a check, with its safety finding last when it has one. Every check
+ * builds its details afresh, so they are taken over as they are; only a finding needs a new object.
+ */
+function detailsOf(outcome: CheckEvaluation): CheckResult['details'] {
+  if (!outcome.safetyFinding) return outcome.details ?? {};
+  return { ...outcome.details, safetyFinding: outcome.safetyFinding };
+}
 
 /** Run each check module and shape its outcome as a report line with its full working. */
 export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey: S, context: C): CheckResult[] {
@@ -27,7 +37,7 @@ export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey
           formula: '',
           source: '',
           sourceMark: null,
-          text: `Not measured: ${outcome.notMeasured}. Counts against confidence; not assumed to pass.`,
+          text: notMeasuredText(outcome.notMeasured),
         },
         details: {},
       } satisfies CheckResult;
@@ -53,10 +63,7 @@ export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey
         sourceMark: outcome.permissible.source,
         text: `${outcome.summary} Permissible: ${outcome.permissible.basis}. ${source}.`,
       },
-      details: {
-        ...(outcome.details ?? {}),
-        ...(outcome.safetyFinding ? { safetyFinding: outcome.safetyFinding } : {}),
-      },
+      details: detailsOf(outcome),
     } satisfies CheckResult;
   });
 }

@@ -1,6 +1,6 @@
 import { fmt, roundTo } from '../format-number';
 import type { CheckResult, SubsystemResult } from '../result';
-import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '../subsystems';
+import { SUBSYSTEM_TABLE, SUBSYSTEMS, type SubsystemId } from '../subsystems';
 import { gradeForScore } from './condition-scale';
 
 /**
@@ -10,8 +10,11 @@ import { gradeForScore } from './condition-scale';
  * never raises a grade. Waygrade rule (common practice).
  */
 export function gradeSubsystems(checks: readonly CheckResult[]): SubsystemResult[] {
+  // One pass to sort the checks into their subsystems, in check order.
+  const bySubsystem = new Map<SubsystemId, CheckResult[]>(SUBSYSTEMS.map((id) => [id, []]));
+  for (const c of checks) bySubsystem.get(c.subsystem)?.push(c);
   return SUBSYSTEMS.map((id) => {
-    const own = checks.filter((c) => c.subsystem === id);
+    const own = bySubsystem.get(id)!;
     const measured = own.filter((c) => c.status === 'measured' && c.score !== null);
     const { label } = SUBSYSTEM_TABLE[id];
     if (!measured.length) {

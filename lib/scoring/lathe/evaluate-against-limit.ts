@@ -40,14 +40,15 @@ export function evaluateDeviation(input: DeviationCheckInput): CheckEvaluation {
   const summary = wrongDirection
     ? `${input.what} ${fmt(input.deviation)} ${input.unit} is the wrong way${input.wrongDirectionText ? ` (${input.wrongDirectionText})` : ''}: ${band.label.toLowerCase()}.`
     : `${input.what} ${fmt(input.deviation)} ${input.unit} against ${fmt(p.value)} ${p.unit} permitted: ${band.label.toLowerCase()} (${band.meaning}).`;
-  return {
+  const evaluation: CheckEvaluation = {
     measured: { value: roundTo(input.deviation, 6), unit: input.unit },
     permissible: p,
     q,
     inputs: input.inputs,
     formula,
     summary,
-    ...(input.details ? { details: input.details } : {}),
-    ...(input.safetyFindingWhenOver && q > 1 ? { safetyFinding: input.safetyFindingWhenOver } : {}),
   };
+  if (input.details) evaluation.details = input.details;
+  if (input.safetyFindingWhenOver && q > 1) evaluation.safetyFinding = input.safetyFindingWhenOver;
+  return evaluation;
 }

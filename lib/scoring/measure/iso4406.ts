@@ -42,9 +42,12 @@ export function iso4406Code(counts: { atLeast4um: number; atLeast6um: number; at
   };
 }
 
+function formatScaleNumber(n: number): string {
+  return n >= ISO_4406_ABOVE_TABLE ? '>28' : String(n);
+}
+
 export function formatIso4406(code: Iso4406Code): string {
-  const f = (n: number) => (n >= ISO_4406_ABOVE_TABLE ? '>28' : String(n));
-  return `${f(code.atLeast4um)}/${f(code.atLeast6um)}/${f(code.atLeast14um)}`;
+  return `${formatScaleNumber(code.atLeast4um)}/${formatScaleNumber(code.atLeast6um)}/${formatScaleNumber(code.atLeast14um)}`;
 }
 
 export function parseIso4406(text: string): Iso4406Code | null {

@@ -45,11 +45,20 @@ export function estimateRepairs(checks: readonly CheckResult[], catalogue: Repai
   const triggered = new Map<string, string[]>();
   for (const check of checks) {
     if (check.status !== 'measured' || check.band === null) continue;
-    const reached = (rulesByCheck.get(check.id) ?? []).filter((r) => bandRank(check.band!) >= bandRank(r.fromBand));
-    if (!reached.length) continue;
-    const mostSevere = Math.max(...reached.map((r) => bandRank(r.fromBand)));
-    for (const rule of reached.filter((r) => bandRank(r.fromBand) === mostSevere)) {
-      triggered.set(rule.actionId, [...(triggered.get(rule.actionId) ?? []), check.id]);
+    const rules = rulesByCheck.get(check.id);
+    if (!rules) continue;
+    const reachedRank = bandRank(check.band);
+    // The most severe band among the rules this check's band reaches; every rule from that band applies.
+    let mostSevere = Number.NEGATIVE_INFINITY;
+    for (const rule of rules) {
+      const from = bandRank(rule.fromBand);
+      if (from <= reachedRank && from > mostSevere) mostSevere = from;
+    }
+    for (const rule of rules) {
+      if (bandRank(rule.fromBand) !== mostSevere) continue;
+      const by = triggered.get(rule.actionId);
+      if (by) by.push(check.id);
+      else triggered.set(rule.actionId, [check.id]);
     }
   }
   const superseded = new Set<string>();
