@@ -90,3 +90,14 @@ export async function getReviewBundle(inspectionId: number) {
   const surveyPhotos = await db.select().from(photos).where(eq(photos.inspectionId, inspectionId)).orderBy(asc(photos.section), asc(photos.id));
   return { report: report ?? null, survey: survey ?? null, photos: surveyPhotos };
 }
+
+/** The newest step on an inspection's timeline, with its note (e.g. why a survey was sent back). */
+export async function findLatestStatusEvent(inspectionId: number) {
+  const [row] = await db
+    .select({ fromStatus: inspectionStatusEvents.fromStatus, toStatus: inspectionStatusEvents.toStatus, note: inspectionStatusEvents.note, createdAt: inspectionStatusEvents.createdAt })
+    .from(inspectionStatusEvents)
+    .where(eq(inspectionStatusEvents.inspectionId, inspectionId))
+    .orderBy(desc(inspectionStatusEvents.createdAt), desc(inspectionStatusEvents.id))
+    .limit(1);
+  return row ?? null;
+}

@@ -5,6 +5,7 @@ import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { db } from '@/db/client';
 import { findInspectionWithMachine, findSurvey } from '@/db/queries/surveys';
+import { findLatestStatusEvent } from '@/db/queries/inspections';
 import { requirePageSession } from '@/lib/auth/session';
 import { formatDateTime, formatMm } from '@/lib/format';
 import { INSPECTION_STATUS_LABELS } from '@/lib/inspection-status';
@@ -24,6 +25,8 @@ export default async function JobPage({ params, searchParams }: { params: Promis
   const survey = await findSurvey(db, inspectionId);
   const started = survey ? sectionsStarted(survey.data).length : 0;
   const justSubmitted = (await searchParams).submitted === '1' && job.status === 'in_review';
+  const latest = job.status === 'on_site' ? await findLatestStatusEvent(job.id) : null;
+  const sentBack = latest && (latest.fromStatus === 'in_review' || latest.fromStatus === 'released') ? latest : null;
 
   return (
     <div className="mx-auto flex max-w-2xl flex-col gap-5">
@@ -43,6 +46,13 @@ export default async function JobPage({ params, searchParams }: { params: Promis
         <div role="status" className="rounded-card border-2 border-band-true bg-paper-raised p-4">
           <p className="text-lg font-semibold">Survey submitted — thank you.</p>
           <p className="text-ink-soft">It has been scored and is waiting for the coordinator’s review. It can no longer be changed from your phone.</p>
+        </div>
+      ) : null}
+      {sentBack ? (
+        <div role="status" className="rounded-card border-2 border-copper bg-copper-light/40 p-4">
+          <p className="text-lg font-semibold">{sentBack.fromStatus === 'released' ? 'Reopened for a correction' : 'Sent back by the coordinator'}</p>
+          <p className="mt-1">{sentBack.note}</p>
+          <p className="figures mt-1 text-sm text-ink-soft">{formatDateTime(sentBack.createdAt)} UTC · your readings are kept as you left them</p>
         </div>
       ) : null}
       <Card title="The machine">
