@@ -17,6 +17,8 @@ export default defineConfig({
         test: {
           name: 'unit',
           setupFiles: ['tests/support/unit-env.ts'],
+          // Property-based tests run thousands of cases; a busy two-core machine needs the headroom.
+          testTimeout: 60_000,
           include: ['lib/**/*.test.ts', 'services/**/*.test.ts', 'components/**/*.test.ts', 'db/**/*.test.ts'],
           environment: 'node',
         },

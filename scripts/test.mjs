@@ -48,13 +48,20 @@ try {
   const resultsDir = path.join(root, 'tmp', `test-run-${process.env.WAYGRADE_PORT_OFFSET ?? 0}`);
   rmSync(resultsDir, { recursive: true, force: true });
   mkdirSync(resultsDir, { recursive: true });
-  const resultsFile = path.join(resultsDir, 'vitest-results.json');
-  await run(
-    process.execPath,
-    ['node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${resultsFile}`],
-    { cwd: root, env, allowFailure: true },
-  );
-  const tests = vitestCounts(resultsFile);
+  // One project at a time: on two cores, browser tests beside CPU-heavy property tests starve both.
+  const tests = { passed: 0, failed: 0 };
+  for (const project of ['unit', 'integration', 'e2e']) {
+    console.log(`\n── ${project} tests ──`);
+    const resultsFile = path.join(resultsDir, `vitest-${project}.json`);
+    await run(
+      process.execPath,
+      ['node_modules/vitest/vitest.mjs', 'run', '--project', project, '--reporter=default', '--reporter=json', `--outputFile.json=${resultsFile}`],
+      { cwd: root, env, allowFailure: true },
+    );
+    const counts = vitestCounts(resultsFile);
+    tests.passed += counts.passed;
+    tests.failed += counts.failed;
+  }
   const checkPassed = checks.filter((c) => c.ok).length;
   const checkFailed = checks.length - checkPassed;
   for (const c of checks) console.log(`${c.ok ? 'ok  ' : 'FAIL'} ${c.name} (${c.seconds.toFixed(1)} s)`);
