@@ -211,8 +211,12 @@ describe('webhook delivery to an endpoint that is down', () => {
     await controlRequest(harness.standIn, 'delivery', { method: 'PUT', body: { endpointUrl: 'http://127.0.0.1:9/webhook' } });
     const session = await harness.stripe.checkout.sessions.create(reportPurchaseParams());
     await harness.stripe.checkout.sessions.expire(session.id);
-    await new Promise((resolve) => setTimeout(resolve, 150));
-    const refused = await controlEvent(harness, session.id, 'checkout.session.expired');
+    // Wait for the first (refused) attempt to be recorded; a busy machine may take a while.
+    let refused = await controlEvent(harness, session.id, 'checkout.session.expired');
+    for (let waited = 0; !refused.deliveries[0]?.attempts[0] && waited < 10_000; waited += 50) {
+      await new Promise((resolve) => setTimeout(resolve, 50));
+      refused = await controlEvent(harness, session.id, 'checkout.session.expired');
+    }
     expect(refused.deliveries[0]?.attempts[0]).toMatchObject({ status: null });
     expect(refused.deliveries[0]?.attempts[0]?.error).toMatch(/fetch failed/);
 
