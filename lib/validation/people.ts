@@ -11,7 +11,7 @@ export const inviteUserSchema = z.object({
   role: z.enum(INVITED_ROLES, 'Choose inspector or coordinator'),
 });
 
-const userId = z.string().uuid('Unknown account');
+const userId = z.uuid('Unknown account');
 
 export const changeRoleSchema = z.object({ userId, role: z.enum(ROLES, 'Choose a role') });
 

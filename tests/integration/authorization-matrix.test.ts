@@ -25,7 +25,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { and, count, eq, gt } from 'drizzle-orm';
 import { NextRequest } from 'next/server';
 import { closeDatabase, db } from '@/db/client';
-import { auditEvents, inspections, machines, reportAccessGrants, reports, users } from '@/db/schema';
+import { auditEvents, inspections, machines, reportAccessGrants, reports, shortlists, users } from '@/db/schema';
 import { ERROR_CODES } from '@/lib/errors';
 import { ROLES, type Role } from '@/db/schema/users';
 import type { InspectionStatus } from '@/db/schema/inspections';
@@ -76,6 +76,7 @@ type Fixtures = {
   accounts: Record<Role, TestAccount>;
   otherSeller: TestAccount;
   otherInspector: TestAccount;
+  otherDealer: TestAccount;
 };
 
 let fx: Fixtures;
@@ -122,10 +123,16 @@ async function releasedReport(which: 'granted' | 'never-granted', grantTo?: Test
   return first.id;
 }
 
+async function newShortlist(ownerId: string) {
+  const [row] = await db.insert(shortlists).values({ ownerId, name: `Matrix list ${randomInt(1, 1e9)}` }).$returningId();
+  return row!.id;
+}
+
 const tokenFor = (purpose: 'verify_email' | 'reset_password' | 'invitation', userId: string) => issueToken(db, userId, purpose);
 
 /** The seller's own record when a seller acts, the fixture seller's otherwise. */
 const sellerOf = (c: Context) => (c.actor?.role === 'seller' ? c.actor : c.fx.accounts.seller);
+const comparerOf = (c: Context) => (c.actor?.role === 'dealer' || c.actor?.role === 'admin' ? c.actor : c.fx.accounts.dealer);
 const inspectorOf = (c: Context) => (c.actor?.role === 'inspector' ? c.actor : c.fx.accounts.inspector);
 const tomorrow = () => new Date(Date.now() + 86_400_000).toISOString().slice(0, 10);
 
@@ -265,6 +272,9 @@ const RULES: Record<string, Rule> = {
   // order changes); validation comes after the role check, so the role is still what is judged.
   'app/(backoffice)/admin/fees/actions.ts#saveFeeAction': { kind: 'action', form: true, allowed: ['admin'], input: () => ({ sizeClass: 'medium', amount: '-1' }) },
   'app/(backoffice)/admin/orders/actions.ts#refundOrderAction': { kind: 'action', form: true, allowed: ['admin'], input: () => ({ orderId: '999999999', reason: 'x' }) },
+  // Market data feeds every valuation: the coordinator's inputs are refused by validation so no sale is added.
+  'app/(backoffice)/admin/market/actions.ts#recordComparableSaleAction': { kind: 'action', allowed: ['admin'], input: () => ({ description: '' }) },
+  'app/(backoffice)/admin/market/actions.ts#importComparableSalesAction': { kind: 'action', allowed: ['admin'], input: () => ({ csv: '' }) },
   'app/(backoffice)/reports/[id]/actions.ts#buyReportAction': { kind: 'action', form: true, allowed: ['buyer', 'dealer'], input: () => ({ reportId: '999999999' }) },
   'app/api/reports/[id]/pdf/route.ts#GET': {
     kind: 'route',
@@ -285,6 +295,32 @@ const RULES: Record<string, Rule> = {
     kind: 'signed',
     why: "the payment provider's signature over the body is the only credential; services/payments and the payment tests cover signed events",
     request: () => ({ url: '/api/payments/webhook', method: 'POST', body: { id: 'evt_forged', type: 'checkout.session.completed' }, params: {} }),
+  },
+  // Comparison: dealers and coordinators; shortlists only by their owner.
+  'app/api/compare/route.ts#GET': { kind: 'route', allowed: ['dealer', 'admin'], request: () => ({ url: '/api/compare', params: {} }) },
+  'app/api/compare/export/route.ts#GET': { kind: 'route', allowed: ['dealer', 'admin'], request: () => ({ url: '/api/compare/export', params: {} }) },
+  'app/(backoffice)/compare/actions.ts#createShortlistAction': {
+    kind: 'action',
+    allowed: ['dealer', 'admin'],
+    input: async (c) => ({ name: `Matrix list ${randomInt(1, 1e9)}`, machineIds: [await newMachine(c.fx.accounts.seller.id)] }),
+  },
+  'app/(backoffice)/compare/actions.ts#addToShortlistAction': {
+    kind: 'action',
+    allowed: ['dealer', 'admin'],
+    input: async (c) => ({ shortlistId: await newShortlist(comparerOf(c).id), machineIds: [await newMachine(c.fx.accounts.seller.id)] }),
+    others: { allowed: [], input: async (c) => ({ shortlistId: await newShortlist(c.fx.otherDealer.id), machineIds: [await newMachine(c.fx.accounts.seller.id)] }) },
+  },
+  'app/(backoffice)/compare/actions.ts#removeFromShortlistAction': {
+    kind: 'action',
+    allowed: ['dealer', 'admin'],
+    input: async (c) => ({ shortlistId: await newShortlist(comparerOf(c).id), machineId: await newMachine(c.fx.accounts.seller.id) }),
+    others: { allowed: [], input: async (c) => ({ shortlistId: await newShortlist(c.fx.otherDealer.id), machineId: await newMachine(c.fx.accounts.seller.id) }) },
+  },
+  'app/(backoffice)/compare/actions.ts#deleteShortlistAction': {
+    kind: 'action',
+    allowed: ['dealer', 'admin'],
+    input: async (c) => ({ shortlistId: await newShortlist(comparerOf(c).id) }),
+    others: { allowed: [], input: async (c) => ({ shortlistId: await newShortlist(c.fx.otherDealer.id) }) },
   },
   'app/api/uploadthing/route.ts#GET': {
     kind: 'delegated',
@@ -406,7 +442,12 @@ function subjectActor(subject: Subject) {
 describe('the authorisation matrix', () => {
   beforeAll(async () => {
     const entries = await Promise.all(ROLES.map(async (role) => [role, await createAccount(role)] as const));
-    fx = { accounts: Object.fromEntries(entries) as Record<Role, TestAccount>, otherSeller: await createAccount('seller'), otherInspector: await createAccount('inspector') };
+    fx = {
+      accounts: Object.fromEntries(entries) as Record<Role, TestAccount>,
+      otherSeller: await createAccount('seller'),
+      otherInspector: await createAccount('inspector'),
+      otherDealer: await createAccount('dealer'),
+    };
   });
   afterAll(closeDatabase);
 
