@@ -1,0 +1,47 @@
+import Papa from 'papaparse';
+import { LATHE_KIND_LABELS, type ComparisonRow } from './comparison-row';
+import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '@/lib/scoring/subsystems';
+import { SUBSYSTEM_KEYS } from '@/lib/validation/comparison-query';
+
+const euros = (minor: number | null) => (minor === null ? '' : (minor / 100).toFixed(2));
+
+/**
+ * The CSV columns, in the table's order, each header with its unit. Figures are plain numbers (no
+ * thousands separators or currency signs) so a spreadsheet reads them as numbers; a blank means
+ * "not measured" or "comes with the report".
+ */
+const CSV_COLUMNS: ReadonlyArray<[header: string, value: (row: ComparisonRow) => string | number]> = [
+  ['Report id', (r) => r.reportId],
+  ['Machine id', (r) => r.machineId],
+  ['Maker', (r) => r.maker],
+  ['Model', (r) => r.model],
+  ['Type', (r) => LATHE_KIND_LABELS[r.kind]],
+  ['Swing over bed (mm)', (r) => r.swingMm],
+  ['Between centres (mm)', (r) => r.betweenCentresMm],
+  ['Year built', (r) => r.yearBuilt ?? ''],
+  ['Town', (r) => r.town],
+  ['Region', (r) => r.region],
+  ['Overall condition', (r) => r.overallCondition],
+  ['Overall score (0-100)', (r) => r.overallScore],
+  ...SUBSYSTEMS.map((id): [string, (r: ComparisonRow) => string] => [`${SUBSYSTEM_TABLE[id].label} grade`, (r) => r.subsystems[SUBSYSTEM_KEYS[id]].grade ?? '']),
+  ['Confidence (%)', (r) => Math.round(r.confidence * 100)],
+  ['Asking price', (r) => euros(r.askingPriceMinor)],
+  ['Asking price currency', (r) => r.priceCurrency],
+  ['Fair market value', (r) => euros(r.fairMarketValueMinor)],
+  ['Price / value', (r) => (r.priceToValue === null ? '' : r.priceToValue.toFixed(2))],
+  ['Repair estimate', (r) => euros(r.repairEstimateMinor)],
+  ['Value currency', (r) => r.valueCurrency],
+  ['Report released (UTC)', (r) => r.releasedAt.slice(0, 10)],
+  ['Details', (r) => (r.hasDetails ? 'bought' : 'summary only')],
+];
+
+export function comparisonCsv(rows: readonly ComparisonRow[]): string {
+  return Papa.unparse(
+    {
+      fields: CSV_COLUMNS.map(([header]) => header),
+      data: rows.map((row) => CSV_COLUMNS.map(([, value]) => value(row))),
+    },
+    // Formula escaping: a maker called "=cmd" must not run in a spreadsheet.
+    { escapeFormulae: true, newline: '\r\n' },
+  );
+}

@@ -1,0 +1,17 @@
+import 'server-only';
+import { listComparisonRows, loadDetailVisibility } from '@/db/queries/comparison';
+import { defineOperation } from '@/lib/auth/operation';
+import { comparisonQuerySchema } from '@/lib/validation/comparison-query';
+
+/** A page of the dealers' comparison table: summary grades of every released report, details of the ones bought. */
+export const listComparisonPage = defineOperation({
+  name: 'compare.list',
+  entityType: 'comparison',
+  access: 'compare.use',
+  input: comparisonQuerySchema,
+  auditSuccess: false,
+  async run({ actor, input, tx }) {
+    const visibility = await loadDetailVisibility(tx, actor!);
+    return { data: await listComparisonRows(tx, input, visibility, actor!.id) };
+  },
+});
