@@ -98,6 +98,7 @@ export const ROLE_NAVIGATION: Record<Role, ReadonlyArray<{ href: string; label: 
   ],
   dealer: [
     { href: '/dashboard', label: 'Overview' },
+    { href: '/compare', label: 'Compare' },
     { href: '/reports', label: 'Reports' },
     { href: '/purchases', label: 'Purchases' },
   ],
@@ -105,8 +106,10 @@ export const ROLE_NAVIGATION: Record<Role, ReadonlyArray<{ href: string; label: 
     { href: '/dashboard', label: 'Overview' },
     { href: '/inspections', label: 'Inspections' },
     { href: '/reports', label: 'Reports' },
+    { href: '/compare', label: 'Compare' },
     { href: '/admin/orders', label: 'Orders' },
     { href: '/admin/fees', label: 'Fees' },
+    { href: '/admin/market', label: 'Market data' },
     { href: '/admin/people', label: 'People' },
     { href: '/admin/audit', label: 'Audit log' },
   ],
