@@ -19,6 +19,9 @@ export type PhotoVariant = keyof typeof PHOTO_VARIANTS;
 const ACCEPTED_FORMATS = new Set(['jpeg', 'png', 'webp', 'heif', 'avif', 'tiff']);
 // A 50-megapixel limit keeps a decompression bomb from exhausting the server.
 const MAX_INPUT_PIXELS = 50_000_000;
+// The same 16 MB the upload route allows; checked again here because the pipeline reads the file
+// back from storage, where anything with the upload key could have put something larger.
+export const MAX_PHOTO_BYTES = 16 * 1024 * 1024;
 
 export class NotAPhotoError extends Error {
   constructor(message = 'This file is not a photo Waygrade can read. Take the photo again or choose a JPEG, PNG, WebP or HEIF image.') {
@@ -54,7 +57,15 @@ async function render(input: Uint8Array, variant: PhotoVariant): Promise<Process
   };
 }
 
+export class PhotoTooLargeError extends NotAPhotoError {
+  constructor() {
+    super(`This photo is larger than ${MAX_PHOTO_BYTES / 1024 / 1024} MB. Take it again at the phone's normal size.`);
+    this.name = 'PhotoTooLargeError';
+  }
+}
+
 export async function processPhoto(input: Uint8Array): Promise<ProcessedPhoto> {
+  if (input.byteLength > MAX_PHOTO_BYTES) throw new PhotoTooLargeError();
   let format: string | undefined;
   try {
     format = (await sharp(input, { failOn: 'error', limitInputPixels: MAX_INPUT_PIXELS }).metadata()).format;

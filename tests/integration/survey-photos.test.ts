@@ -1,6 +1,7 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { crc32, deflateSync } from 'node:zlib';
 import { eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import { UTApi, UTFile } from 'uploadthing/server';
@@ -27,6 +28,42 @@ async function phonePhotoWithLocation() {
     .withExif({ IFD0: { Make: 'Fieldphone', Model: 'FP-9' }, IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 12/1', GPSLongitudeRef: 'W', GPSLongitude: '1/1 15/1 30/1' } })
     .toBuffer();
 }
+
+/** A PNG chunk: length, type, data and the CRC over type and data. */
+function pngChunk(type: string, data: Buffer) {
+  const length = Buffer.alloc(4);
+  length.writeUInt32BE(data.length);
+  const body = Buffer.concat([Buffer.from(type, 'ascii'), data]);
+  const crc = Buffer.alloc(4);
+  crc.writeUInt32BE(crc32(body));
+  return Buffer.concat([length, body, crc]);
+}
+
+/**
+ * A decompression bomb: a well-formed 10 000 × 10 000 pixel PNG (100 megapixels, 300 MB once
+ * decoded to colour, twice Waygrade's limit but under libvips' own default) that is a few kilobytes
+ * on disk, because every pixel is black.
+ */
+function decompressionBombPng() {
+  const side = 10_000;
+  const header = Buffer.alloc(13);
+  header.writeUInt32BE(side, 0);
+  header.writeUInt32BE(side, 4);
+  header.set([1, 0, 0, 0, 0], 8); // 1-bit greyscale, deflate, no filter, no interlace
+  const rows = Buffer.alloc(side * (1 + side / 8)); // each row: filter byte 0, then 1 250 zero bytes
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    pngChunk('IHDR', header),
+    pngChunk('IDAT', deflateSync(rows, { level: 9 })),
+    pngChunk('IEND', Buffer.alloc(0)),
+  ]);
+}
+
+const SVG_WITH_SCRIPT = `<?xml version="1.0"?>
+<svg xmlns="http://www.w3.org/2000/svg" width="800" height="600" onload="fetch('/api/compare?steal='+document.cookie)">
+  <script>alert(document.domain)</script>
+  <rect width="800" height="600" fill="#777"/>
+</svg>`;
 
 describe('survey photo processing', () => {
   let dataDir: string;
@@ -118,6 +155,60 @@ describe('survey photo processing', () => {
     const original = await uploadOriginal('ways-near-chuck.jpg', Buffer.from(truncated), 'image/jpeg');
     const outcome = await ingestSurveyPhoto(store, original, { inspectionId, section: 'bedAndWays' });
     expect(outcome.ok).toBe(false);
+  });
+
+  it.each([
+    ['an SVG with a script, sent as an SVG', 'gauge.svg', Buffer.from(SVG_WITH_SCRIPT), 'image/svg+xml'],
+    ['an SVG with a script, named and sent as a JPEG', 'gauge.jpg', Buffer.from(SVG_WITH_SCRIPT), 'image/jpeg'],
+    ['an HTML page named as a JPEG', 'tailstock.jpg', Buffer.from('<!doctype html><script>alert(1)</script><img src=x onerror=alert(2)>'), 'image/jpeg'],
+    ['a GIF named as a JPEG', 'chuck.jpg', Buffer.from('R0lGODlhAQABAIAAAAAAAP///yH5BAEAAAAALAAAAAABAAEAAAIBRAA7', 'base64'), 'image/jpeg'],
+    ['a PDF named as a PNG', 'manual.png', Buffer.from('%PDF-1.7\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n'), 'image/png'],
+  ])('refuses %s, stores nothing and deletes the upload', async (_what, name, bytes, type) => {
+    const { inspectionId } = await bookedInspection({ start: true });
+    const put = vi.spyOn(store, 'put');
+    const original = await uploadOriginal(name, bytes, type);
+    const outcome = await ingestSurveyPhoto(store, original, { inspectionId, section: 'identity' });
+    expect(outcome).toMatchObject({ ok: false, message: expect.stringMatching(/This file is not a photo Waygrade can read/) });
+    expect(put).not.toHaveBeenCalled();
+    put.mockRestore();
+    expect((await fetch(original.url)).status).toBe(404);
+  });
+
+  it('refuses a decompression bomb without decoding it, and deletes it', async () => {
+    const { inspectionId } = await bookedInspection({ start: true });
+    const bomb = decompressionBombPng();
+    expect(bomb.byteLength).toBeLessThan(200_000);
+    expect(await sharp(bomb).metadata()).toMatchObject({ format: 'png', width: 10_000, height: 10_000 });
+    const original = await uploadOriginal('bed-overview.png', bomb, 'image/png');
+    const outcome = await ingestSurveyPhoto(store, original, { inspectionId, section: 'bedAndWays' });
+    expect(outcome.ok).toBe(false);
+    expect((await fetch(original.url)).status).toBe(404);
+  });
+
+  it('refuses a file over 16 MB before decoding it, even a genuine photo, and deletes it', async () => {
+    const { inspectionId } = await bookedInspection({ start: true });
+    const photo = await phonePhotoWithLocation();
+    // JPEG readers stop at the end-of-image marker; the padding after it only makes the file large.
+    const oversized = Buffer.concat([photo, Buffer.alloc(16 * 1024 * 1024 + 1 - photo.byteLength)]);
+    const original = await uploadOriginal('headstock.jpg', oversized, 'image/jpeg');
+    const outcome = await ingestSurveyPhoto(store, original, { inspectionId, section: 'headstock' });
+    expect(outcome).toMatchObject({ ok: false, message: expect.stringMatching(/larger than 16 MB/) });
+    expect((await fetch(original.url)).status).toBe(404);
+  });
+
+  it('keeps no location from a PNG sent as a JPEG: the stored copies are judged by content and carry no metadata', async () => {
+    const { inspectionId } = await bookedInspection({ start: true });
+    const png = await sharp(await phonePhotoWithLocation()).keepExif().png().toBuffer();
+    expect(hasGpsPointer((await sharp(png).metadata()).exif)).toBe(true);
+    const original = await uploadOriginal('apron.jpg', png, 'image/jpeg');
+    const outcome = await ingestSurveyPhoto(store, original, { inspectionId, section: 'identity' });
+    if (!outcome.ok) throw new Error(outcome.message);
+    for (const key of [outcome.files.fileKey, outcome.files.displayKey, outcome.files.thumbKey]) {
+      const meta = await sharp(await fetchBytes(`${uploads.url}/f/${key}`)).metadata();
+      expect(meta.exif).toBeUndefined();
+      expect(meta.xmp).toBeUndefined();
+      expect(['jpeg', 'webp']).toContain(meta.format);
+    }
   });
 
   it('refuses a photo for an inspection that is not assigned to the inspector', async () => {
