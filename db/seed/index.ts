@@ -23,7 +23,9 @@ import { defaultRepairCostCatalogue, scoreSurvey, SURVEY_FORMAT_VERSION, type La
 import { hashPassword } from '@/lib/auth/password';
 import { sizeClassForSwing } from '@/lib/machine-size';
 import { DEMO_LOGINS } from './demo-logins.mjs';
-import { seededRandom } from './random';
+import { seededRandom, type Random } from './random';
+import { seedDemoPhotos } from './demo-photos';
+import { uploadthingFileStore } from '@/lib/storage/uploadthing-file-store';
 import { ACCESSORY_SETS, CANCEL_REASONS, FEES, LATHE_MODELS, SITE_NOTES, WORKSHOPS } from './scenario';
 import { demoComparableSales } from './comparable-sales';
 import { demoSurvey, SURVEY_SECTIONS_IN_ORDER } from './demo-survey';
@@ -221,7 +223,36 @@ export async function seedDemo(now = new Date()) {
     }
   }
   await seedPurchases(byRole('buyer').concat(byRole('dealer')), now);
-  return { workshops: workshopIds.length, users: accounts.length, machines: created.length, reports: releasedReports.length };
+  const photosStored = await seedPhotosWhereUploadsAnswer(random);
+  return { workshops: workshopIds.length, users: accounts.length, machines: created.length, reports: releasedReports.length, photos: photosStored };
+}
+
+/** Photos for the first reports; the demo still works (without photos) when no upload service answers. */
+async function seedPhotosWhereUploadsAnswer(random: Random) {
+  const targets = await db
+    .select({ inspectionId: reports.inspectionId, machineId: reports.machineId, uploadedById: inspections.inspectorId })
+    .from(reports)
+    .innerJoin(inspections, eq(inspections.id, reports.inspectionId))
+    .orderBy(reports.id)
+    .limit(8);
+  // The uploadthing SDK warns about its own deprecated result fields on every file it stores;
+  // that is noise in the start command's output, so those lines are dropped while seeding.
+  const warn = console.warn;
+  console.warn = (...args: unknown[]) => {
+    if (!String(args[0]).includes('[uploadthing][deprecated]')) warn(...args);
+  };
+  try {
+    return await seedDemoPhotos(
+      uploadthingFileStore(),
+      targets.map((t) => ({ ...t, uploadedById: t.uploadedById! })),
+      random,
+    );
+  } catch (error) {
+    console.warn(`Demo data: photos left out, the upload service did not take them (${error instanceof Error ? error.message : error})`);
+    return 0;
+  } finally {
+    console.warn = warn;
+  }
 }
 
 /** The first buyer and dealer have already bought a few released reports. */
@@ -266,7 +297,9 @@ async function main() {
     return;
   }
   const summary = await seedDemo();
-  console.log(`Demo data: ${summary.workshops} workshops, ${summary.users} people, ${summary.machines} machines, ${summary.reports} reports`);
+  console.log(
+    `Demo data: ${summary.workshops} workshops, ${summary.users} people, ${summary.machines} machines, ${summary.reports} reports, ${summary.photos} photos`,
+  );
 }
 
 main()
