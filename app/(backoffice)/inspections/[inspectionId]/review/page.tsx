@@ -6,6 +6,7 @@ import { Card } from '@/components/ui/card';
 import { StatusPill } from '@/components/ui/status-pill';
 import { getInspection, getReviewBundle } from '@/db/queries/inspections';
 import { requirePageSession } from '@/lib/auth/session';
+import { publicFileUrl } from '@/lib/storage/file-url';
 import { formatDateTime, formatMoney } from '@/lib/format';
 import { can, mayTransition } from '@/lib/roles';
 import type { ScoringResult } from '@/lib/scoring';
@@ -21,7 +22,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ inspect
   const inspectionBundle = Number.isInteger(id) ? await getInspection(id) : null;
   if (!inspectionBundle) notFound();
   const { inspection, machine } = inspectionBundle;
-  const { report, survey } = await getReviewBundle(id);
+  const { report, survey, photos } = await getReviewBundle(id);
   const result = report?.result as ScoringResult | undefined;
 
   const decisions = [
@@ -124,6 +125,24 @@ export default async function ReviewPage({ params }: { params: Promise<{ inspect
                   <ReviewActions inspectionId={inspection.id} reportId={report.id} decisions={[...decisions]} />
                 ) : (
                   <p className="text-ink-soft">Nothing to decide now: the survey is with the inspector.</p>
+                )}
+              </Card>
+              <Card title={`Photos (${photos.length})`}>
+                {photos.length === 0 ? (
+                  <p className="text-ink-soft">No photos were taken.</p>
+                ) : (
+                  <ul className="grid grid-cols-2 gap-3">
+                    {photos.map((photo) => (
+                      <li key={photo.id}>
+                        <a href={publicFileUrl(photo.displayKey ?? photo.fileKey)} target="_blank" rel="noreferrer" className="block">
+                          {/* Thumbnails come from the upload service, already sized; next/image would resize them again. */}
+                          {/* eslint-disable-next-line @next/next/no-img-element */}
+                          <img src={publicFileUrl(photo.thumbKey ?? photo.fileKey)} alt={photo.caption ?? `Photo of ${photo.section}`} className="aspect-[4/3] w-full rounded-lg border border-line object-cover" loading="lazy" />
+                        </a>
+                        <p className="mt-1 text-sm text-ink-soft">{photo.caption ?? photo.section}</p>
+                      </li>
+                    ))}
+                  </ul>
                 )}
               </Card>
               <Card title="Readings as entered">
