@@ -1,21 +1,15 @@
+import { SURVEY_SECTIONS } from '@/lib/survey/survey-sections';
+
 /**
  * The raw survey as the inspector entered it, section by section, so the reviewer can set each
  * graded result beside the reading it came from.
  */
 
+// Section titles as the inspector saw them; the survey format's own members for the rest.
 const SECTION_LABELS: Record<string, string> = {
+  ...Object.fromEntries(SURVEY_SECTIONS.map((section) => [section.id, section.title])),
   machine: 'Identity',
   instruments: 'Instruments',
-  lubrication: 'Headstock and lubrication',
-  gearboxAndFeeds: 'Gearbox and feeds',
-  drive: 'Drive',
-  bedAndWays: 'Bed and ways',
-  spindle: 'Spindle',
-  slidesAndScrews: 'Slides and screws',
-  tailstock: 'Tailstock',
-  testCuts: 'Test cuts',
-  electricalAndSafety: 'Electrical and safety',
-  accessories: 'Accessories',
   notes: 'Notes',
 };
 
