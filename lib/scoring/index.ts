@@ -17,6 +17,7 @@ export type {
   CheckExplanation,
   SubsystemResult,
   SafetyFinding,
+  DealBreaker,
   PlotSeries,
   PlotPoint,
   MachineSummary,
@@ -27,6 +28,15 @@ export { SUBSYSTEMS, SUBSYSTEM_TABLE, type SubsystemId } from './subsystems';
 export { LATHE_CHECKS } from './lathe/lathe-checks';
 export { LATHE_LIMITS, SWING_CLASSES, bedStraightnessLimitMm, classFactor } from './limits/lathe-limits';
 export { formatReportText } from './report-text';
+export {
+  HIDDEN_DAMAGE_ITEMS,
+  DEAL_BREAKER_ITEMS,
+  NOT_INSPECTED_AREAS,
+  type HiddenDamageId,
+  type DealBreakerId,
+} from './survey/condition-findings';
+export { AREA_LABELS } from './grading/not-inspected';
+export { REPORT_STATEMENTS, GRADE_SCALE_TEXT } from './report-statements';
 
 // Repair and valuation
 export { defaultRepairCostCatalogue } from './repair/default-repair-cost-catalogue';

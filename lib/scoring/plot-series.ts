@@ -6,7 +6,12 @@ import type { CheckResult, PlotSeries, SubsystemResult } from './result';
 const round = (n: number, digits = 3) => roundTo(n, digits);
 
 /** Series the report and survey screens plot: bed profile with both reference lines, twist, wear. */
-export function plotSeries(ctx: LatheContext, checks: readonly CheckResult[], subsystems: readonly SubsystemResult[]): PlotSeries {
+export function plotSeries(
+  ctx: LatheContext,
+  checks: readonly CheckResult[],
+  subsystems: readonly SubsystemResult[],
+  bedWear: PlotSeries['bedWear'] = null,
+): PlotSeries {
   const profile = ctx.bed.profile;
   const first = profile?.points[0];
   const last = profile?.points[profile.points.length - 1];
@@ -33,6 +38,7 @@ export function plotSeries(ctx: LatheContext, checks: readonly CheckResult[], su
   return {
     bedProfile,
     bedTwist,
+    bedWear,
     checkRatios: checks
       .filter((c) => c.status === 'measured' && c.q !== null && c.band !== null)
       .map((c) => ({ checkId: c.id, label: c.label, q: c.q!, band: c.band! })),

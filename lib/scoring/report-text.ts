@@ -21,6 +21,12 @@ export function formatReportText(r: ScoringResult): string {
   lines.push(`  ${r.overall.explanation}`);
   lines.push(`CONFIDENCE: ${fmt(r.confidence.value * 100, 0)} % — ${r.confidence.explanation}`);
   lines.push('');
+  // Deal-breakers come first, whatever the grade (old results stored before 1.1 have none).
+  if (r.dealBreakers?.length) {
+    lines.push('DEAL-BREAKERS:');
+    for (const d of r.dealBreakers) lines.push(`  ! ${d.label}: ${d.evidence}`);
+    lines.push('');
+  }
   if (r.safetyFindings.length) {
     lines.push('SAFETY — FIX BEFORE USE:');
     for (const f of r.safetyFindings) lines.push(`  ! ${f.message}`);

@@ -50,6 +50,14 @@ export interface SafetyFinding {
   action: 'fix before use';
 }
 
+/** A fault that heads the report whatever the grade. */
+export interface DealBreaker {
+  id: string;
+  label: string;
+  evidence: string;
+  photoRequired: boolean;
+}
+
 export interface PlotPoint {
   x: number;
   y: number;
@@ -65,6 +73,8 @@ export interface PlotSeries {
     shape: 'convex' | 'concave' | 'straight';
   } | null;
   bedTwist: { xUnit: 'mm'; yUnit: 'mm/m'; points: PlotPoint[] } | null;
+  /** Way wear along the bed (thickest station = 0), drawn beside the level profile. */
+  bedWear: { xUnit: 'mm'; yUnit: 'µm'; points: PlotPoint[]; carriageBindsAtMm: number | null } | null;
   /** Each measured check's q, the wear picture at a glance (1 = new-machine limit). */
   checkRatios: { checkId: string; label: string; q: number; band: CheckBand }[];
   subsystemScores: { subsystem: SubsystemId; label: string; score: number }[];
@@ -104,6 +114,8 @@ export interface ScoringResult {
     explanation: string;
   };
   safetyFindings: SafetyFinding[];
+  dealBreakers: DealBreaker[];
+  notInspected: { id: string; label: string; reason: string }[];
   repairEstimate: RepairEstimate;
   valuation: Valuation;
   plots: PlotSeries;

@@ -3,6 +3,9 @@ import { confidenceFrom } from './grading/confidence';
 import { overallCondition } from './grading/overall-condition';
 import { runChecks } from './grading/run-checks';
 import { safetyFindingsFrom } from './grading/safety-findings';
+import { dealBreakersFrom } from './grading/deal-breakers';
+import { notInspectedFrom } from './grading/not-inspected';
+import { bedWearSeries, powerRunNotice } from './bed-wear-series';
 import { gradeSubsystems } from './grading/subsystem-grades';
 import { buildLatheContext, type LatheContext } from './lathe/lathe-context';
 import { LATHE_CHECKS } from './lathe/lathe-checks';
@@ -90,7 +93,10 @@ export function scoreParsedSurvey(survey: ParsedLatheSurvey, options: ScoreOptio
     comparableSales: options.comparableSales ?? [],
     tables: options.valuationTables ?? defaultValuationTables,
   });
+  const confidence = confidenceFrom(checks);
   const notices = [...REPORT_NOTICES];
+  const powerRun = powerRunNotice(survey);
+  if (powerRun) notices.push(powerRun);
   if (!ctx.indicatorResolutionStated) notices.push('Indicator resolution not stated: 0.002 mm assumed when judging the sign of small deviations.');
   return {
     scoringVersion: SCORING_VERSION,
@@ -99,11 +105,13 @@ export function scoreParsedSurvey(survey: ParsedLatheSurvey, options: ScoreOptio
     checks,
     subsystems,
     overall,
-    confidence: confidenceFrom(checks),
+    confidence,
     safetyFindings: safetyFindingsFrom(checks),
+    dealBreakers: dealBreakersFrom(survey),
+    notInspected: notInspectedFrom(survey, confidence),
     repairEstimate,
     valuation,
-    plots: plotSeries(ctx, checks, subsystems),
+    plots: plotSeries(ctx, checks, subsystems, bedWearSeries(survey)),
     notices,
   };
 }

@@ -3,7 +3,7 @@
  * report can always be traced to the exact rules that produced it (a correction is a new version).
  * Bump SCORING_VERSION whenever a limit, band edge, weight, cost or formula changes.
  */
-export const SCORING_VERSION = '1.0.0';
+export const SCORING_VERSION = '1.1.0';
 
 /** Version of the on-site survey format the schema in survey/ describes. */
 export const SURVEY_FORMAT_VERSION = 1 as const;

@@ -24,6 +24,16 @@ import {
   rubricRatingSchema,
   WEAR_RUBRIC,
 } from './rubrics';
+import {
+  carriageLockTestSchema,
+  dealBreakersSchema,
+  hiddenDamageSchema,
+  machineStateSchema,
+  notInspectedSchema,
+  powerRunSchema,
+  safetyGateSchema,
+  wayThicknessSchema,
+} from './condition-findings';
 
 /**
  * Survey format v1 for a manual centre lathe. Sections follow the on-site order of work in
@@ -114,6 +124,7 @@ const speedRangeNoiseSchema = z
     range: z.string().min(1).max(60).describe('Speed range as marked on the machine, e.g. "low", "high", "back gear"'),
     rating: noise.optional(),
     soundLevel: soundLevelSchema.optional(),
+    machineState: machineStateSchema.optional(),
   })
   .strict();
 
@@ -183,6 +194,8 @@ const bedSchema = z
     visualWear: wear.optional(),
     stepNearChuck: lengthSchema.describe('Depth of the worn step in the ways near the chuck').optional(),
     carriageWear: wear.describe('Carriage fit: gibs at end of adjustment, tight toward the tailstock').optional(),
+    carriageLockTest: carriageLockTestSchema.optional(),
+    wayThickness: wayThicknessSchema.optional(),
   })
   .strict();
 
@@ -215,6 +228,7 @@ const spindleSchema = z
       .optional(),
     temperatureRise: temperatureRiseSchema.describe('Bearing housing rise after 30 min at mid speed').optional(),
     vibration: vibrationVelocitySchema.optional(),
+    machineState: machineStateSchema.optional(),
   })
   .strict();
 
@@ -260,6 +274,7 @@ const tailstockSchema = z
       .optional(),
     quillCondition: wear.optional(),
     quillLock: deviceStateSchema.optional(),
+    machineState: machineStateSchema.optional(),
   })
   .strict();
 
@@ -286,6 +301,7 @@ const testCutsSchema = z
       })
       .strict()
       .optional(),
+    machineState: machineStateSchema.optional(),
   })
   .strict();
 
@@ -340,6 +356,11 @@ export const latheSurveySchema = z
     testCuts: testCutsSchema.optional(),
     electricalAndSafety: electricalSchema.optional(),
     accessories: z.array(accessorySchema).max(100).optional(),
+    safetyGate: safetyGateSchema.optional(),
+    powerRun: powerRunSchema.optional(),
+    hiddenDamage: hiddenDamageSchema.optional(),
+    dealBreakers: dealBreakersSchema.optional(),
+    notInspected: notInspectedSchema.optional(),
     notes: z.string().max(5000).optional(),
   })
   .strict()
