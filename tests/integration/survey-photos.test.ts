@@ -191,7 +191,7 @@ describe('survey photo processing', () => {
     // JPEG readers stop at the end-of-image marker; the padding after it only makes the file large.
     const oversized = Buffer.concat([photo, Buffer.alloc(16 * 1024 * 1024 + 1 - photo.byteLength)]);
     const original = await uploadOriginal('headstock.jpg', oversized, 'image/jpeg');
-    const outcome = await ingestSurveyPhoto(store, original, { inspectionId, section: 'headstock' });
+    const outcome = await ingestSurveyPhoto(store, original, { inspectionId, section: 'drive' });
     expect(outcome).toMatchObject({ ok: false, message: expect.stringMatching(/larger than 16 MB/) });
     expect((await fetch(original.url)).status).toBe(404);
   });
