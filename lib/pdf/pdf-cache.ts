@@ -3,26 +3,30 @@ import { mkdir, readFile, rename, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 
 /**
- * Rendered reports on local disk under .data/report-pdfs, one file per report id and version. A
- * released version never changes, so an entry never goes stale. Each app server keeps its own
+ * Rendered reports on local disk under .data/report-pdfs, one file per report version, named by
+ * its id, version and random verification code: a released version never changes, so an entry
+ * never goes stale, and a database that was reset (or another database on the same disk) can
+ * never be served a file rendered for a different report that happened to get the same id. Each app server keeps its own
  * cache; that is fine because the files are derived data and any server can render them again.
  */
+export type PdfCacheKey = { reportId: number; version: number; verificationCode: string };
+
 export function pdfCache(dir = path.join(process.cwd(), '.data', 'report-pdfs')) {
-  const fileFor = (reportId: number, version: number) => path.join(dir, `report-${reportId}-v${version}.pdf`);
+  const fileFor = (key: PdfCacheKey) => path.join(dir, `report-${key.reportId}-v${key.version}-${key.verificationCode.replace(/[^A-Z0-9-]/gi, '')}.pdf`);
   return {
-    async get(reportId: number, version: number): Promise<Buffer | null> {
+    async get(key: PdfCacheKey): Promise<Buffer | null> {
       try {
-        return await readFile(fileFor(reportId, version));
+        return await readFile(fileFor(key));
       } catch {
         return null;
       }
     },
-    async put(reportId: number, version: number, pdf: Buffer) {
+    async put(key: PdfCacheKey, pdf: Buffer) {
       await mkdir(dir, { recursive: true });
       // Written aside and renamed, so a reader never sees half a file.
-      const temporary = `${fileFor(reportId, version)}.${process.pid}.${Date.now()}.tmp`;
+      const temporary = `${fileFor(key)}.${process.pid}.${Date.now()}.tmp`;
       await writeFile(temporary, pdf);
-      await rename(temporary, fileFor(reportId, version));
+      await rename(temporary, fileFor(key));
     },
   };
 }

@@ -20,8 +20,9 @@ export async function reportPdf(reportId: number, cache = pdfCache()): Promise<{
   const report = await findReportForDocument(reportId);
   if (!report) throw new AppError('not_found');
   const cacheable = report.status !== 'draft';
+  const cacheKey = { reportId: report.id, version: report.version, verificationCode: report.verificationCode };
   if (cacheable) {
-    const cached = await cache.get(report.id, report.version);
+    const cached = await cache.get(cacheKey);
     if (cached) return { pdf: cached, fromCache: true };
   }
   // The display size (about screen width) prints sharply at the photo's size on the page; the
@@ -42,6 +43,6 @@ export async function reportPdf(reportId: number, cache = pdfCache()): Promise<{
     photos,
   };
   const pdf = await renderReportPdf(data);
-  if (cacheable && complete) await cache.put(report.id, report.version, pdf);
+  if (cacheable && complete) await cache.put(cacheKey, pdf);
   return { pdf, fromCache: false };
 }
