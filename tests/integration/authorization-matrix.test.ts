@@ -136,6 +136,7 @@ const comparerOf = (c: Context) => (c.actor?.role === 'dealer' || c.actor?.role 
 const inspectorOf = (c: Context) => (c.actor?.role === 'inspector' ? c.actor : c.fx.accounts.inspector);
 const tomorrow = () => new Date(Date.now() + 86_400_000).toISOString().slice(0, 10);
 
+const DISCLOSURE_FORM = { hasKnownFaults: 'no', hasRepairs: 'no', hasCrashes: 'no', usage: 'hobby', supplyVoltage: 400, supplyPhases: 3, included: 'Chuck', saleTerm: 'as-is' };
 const MACHINE_FORM = { maker: 'Matrixwerk', model: 'MX-330', latheKind: 'general_purpose', swingMm: 330, betweenCentresMm: 1000, town: 'Lowmere', region: 'Brenmark', listingStatus: 'draft' };
 // The smallest survey draft the survey format accepts.
 const SURVEY_DRAFT = { surveyFormatVersion: 1, machineType: 'centre-lathe' };
@@ -179,6 +180,8 @@ const RULES: Record<string, Rule> = {
   'app/(backoffice)/admin/people/actions.ts#deactivateAccountAction': { kind: 'action', allowed: ['admin'], input: async () => ({ userId: (await createAccount('buyer')).id }) },
   'app/(backoffice)/admin/people/actions.ts#reactivateAccountAction': { kind: 'action', allowed: ['admin'], input: async () => ({ userId: (await createAccount('buyer', { deactivated: true })).id }) },
 
+  'app/(backoffice)/account/shop-supply-actions.ts#saveShopSupplyAction': { kind: 'action', allowed: ['buyer', 'dealer'], input: () => ({ supplyVoltage: 230, supplyPhases: 1 }) },
+
   // Machines and requests: sellers, and only for their own machines.
   'app/(backoffice)/machines/actions.ts#createMachineAction': { kind: 'action', allowed: ['seller'], input: () => MACHINE_FORM },
   'app/(backoffice)/machines/actions.ts#updateMachineAction': {
@@ -192,6 +195,12 @@ const RULES: Record<string, Rule> = {
     allowed: ['seller'],
     input: async (c) => ({ ...REQUEST_FORM, machineId: await newMachine(sellerOf(c).id) }),
     others: { allowed: [], input: async (c) => ({ ...REQUEST_FORM, machineId: await newMachine(c.fx.otherSeller.id) }) },
+  },
+  'app/(backoffice)/machines/[machineId]/disclosure/actions.ts#saveDisclosureAction': {
+    kind: 'action',
+    allowed: ['seller'],
+    input: async (c) => ({ ...DISCLOSURE_FORM, machineId: await newMachine(sellerOf(c).id) }),
+    others: { allowed: [], input: async (c) => ({ ...DISCLOSURE_FORM, machineId: await newMachine(c.fx.otherSeller.id) }) },
   },
   'app/(backoffice)/machines/actions.ts#cancelInspectionAction': {
     kind: 'action',

@@ -48,6 +48,9 @@ export default async function MachinePage({ params }: { params: Promise<{ machin
           <ButtonLink href={`/machines/${machine.id}/edit`} variant="secondary">
             Edit listing
           </ButtonLink>
+          <ButtonLink href={`/machines/${machine.id}/disclosure`} variant="secondary">
+            Seller’s disclosure
+          </ButtonLink>
           {!open && user.role === 'seller' ? <ButtonLink href={`/machines/${machine.id}/request`}>Request an inspection</ButtonLink> : null}
         </div>
       </div>

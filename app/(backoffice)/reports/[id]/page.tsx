@@ -3,11 +3,17 @@ import { notFound } from 'next/navigation';
 import { Card } from '@/components/ui/card';
 import { ConditionBadge } from '@/components/ui/condition-badge';
 import { findCatalogueReport } from '@/db/queries/reports-catalogue';
+import { findMachineDisclosure } from '@/db/queries/machine-disclosures';
+import { findReportDecisionFacts } from '@/db/queries/report-decision';
+import { assessDisclosure } from '@/lib/decision/disclosure-contradictions';
+import { reportCurrency } from '@/lib/decision/report-currency';
 import { requirePageSession } from '@/lib/auth/session';
 import { formatDate, formatMm, formatMoney } from '@/lib/format';
 import { can } from '@/lib/roles';
 import { DownloadLink } from '../../purchases/download-link';
 import { BuyButton } from './buy-button';
+import { CurrencyBanner } from './currency-banner';
+import { DisclosurePanel } from './disclosure-panel';
 
 export const metadata: Metadata = { title: 'Report summary' };
 
@@ -38,6 +44,11 @@ export default async function ReportSummaryPage({
   if (!report || (owner && report.sellerId !== user.id)) notFound();
   const superseded = report.supersededById !== null;
   const canDownload = report.hasAccess || user.role === 'admin';
+  // The findings behind the claims are part of the paid report: shown to those who may read it.
+  const showsFindings = canDownload || owner;
+  const facts = await findReportDecisionFacts(report.id);
+  const disclosure = facts && showsFindings ? await findMachineDisclosure(facts.machineId) : null;
+  const currency = facts ? reportCurrency(facts.inspectedOn ?? report.releasedAt ?? new Date(), new Date(), facts.validityDays) : null;
 
   return (
     <>
@@ -53,6 +64,7 @@ export default async function ReportSummaryPage({
         </div>
         <ConditionBadge grade={report.overallCondition} />
       </div>
+      {currency ? <CurrencyBanner currency={currency} /> : null}
       {checkout === 'cancelled' ? (
         <p role="status" className="mt-6 rounded-lg border border-line-strong bg-paper-sunken px-4 py-3">
           Payment cancelled. Nothing was charged; you can buy the report whenever you are ready.
@@ -117,6 +129,9 @@ export default async function ReportSummaryPage({
           </div>
         </section>
       </div>
+      {facts && showsFindings ? (
+        <DisclosurePanel assessments={disclosure ? assessDisclosure(disclosure, facts.result, facts.nameplate) : null} answeredOn={disclosure?.updatedAt ?? null} />
+      ) : null}
     </>
   );
 }

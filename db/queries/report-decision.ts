@@ -1,0 +1,67 @@
+import 'server-only';
+import { asc, eq } from 'drizzle-orm';
+import { db } from '@/db/client';
+import { inspections, machineInclusions, machineMovingSheets, machines, reports, reportSettings, surveys } from '@/db/schema';
+import type { SupplySpec } from '@/lib/decision/phase-converter';
+import { DEFAULT_VALIDITY_DAYS } from '@/lib/decision/report-currency';
+import type { ScoringResult } from '@/lib/scoring';
+
+/** The nameplate supply the inspector recorded in the survey, if any. */
+function nameplateSupply(data: unknown): SupplySpec | null {
+  const supply = (data as { machine?: { supply?: { voltage?: unknown; phases?: unknown } } } | null)?.machine?.supply;
+  if (!supply || typeof supply.voltage !== 'number' || (supply.phases !== 1 && supply.phases !== 3)) return null;
+  return { voltage: supply.voltage, phases: supply.phases };
+}
+
+/**
+ * What the report page needs to set the listing beside the findings: the scoring result, the
+ * nameplate from the survey, the listing's price and motor, and when the machine was inspected.
+ */
+export async function findReportDecisionFacts(reportId: number) {
+  const [row] = await db
+    .select({
+      machineId: reports.machineId,
+      result: reports.result,
+      releasedAt: reports.releasedAt,
+      repairEstimateMinor: reports.repairEstimateMinor,
+      reportCurrency: reports.currency,
+      surveyData: surveys.data,
+      surveySubmittedAt: surveys.submittedAt,
+      scheduledAt: inspections.scheduledAt,
+      askingPriceMinor: machines.askingPriceMinor,
+      machineCurrency: machines.currency,
+      motorKw: machines.motorKw,
+      listedAt: machines.createdAt,
+      listingStatus: machines.listingStatus,
+    })
+    .from(reports)
+    .innerJoin(machines, eq(machines.id, reports.machineId))
+    .innerJoin(inspections, eq(inspections.id, reports.inspectionId))
+    .leftJoin(surveys, eq(surveys.inspectionId, reports.inspectionId))
+    .where(eq(reports.id, reportId))
+    .limit(1);
+  if (!row) return null;
+  const result = (typeof row.result === 'string' ? JSON.parse(row.result) : row.result) as ScoringResult;
+  const surveyData = typeof row.surveyData === 'string' ? JSON.parse(row.surveyData) : row.surveyData;
+  const [moving] = await db.select().from(machineMovingSheets).where(eq(machineMovingSheets.machineId, row.machineId)).limit(1);
+  const inclusions = await db.select().from(machineInclusions).where(eq(machineInclusions.machineId, row.machineId)).orderBy(asc(machineInclusions.id));
+  const [settings] = await db.select({ validityDays: reportSettings.validityDays }).from(reportSettings).where(eq(reportSettings.id, 1)).limit(1);
+  const inspectedOn = result.machine.inspectedOn ? new Date(`${result.machine.inspectedOn.slice(0, 10)}T00:00:00Z`) : (row.scheduledAt ?? row.surveySubmittedAt ?? row.releasedAt);
+  return {
+    machineId: row.machineId,
+    result,
+    nameplate: nameplateSupply(surveyData),
+    askingPriceMinor: row.askingPriceMinor,
+    currency: row.machineCurrency,
+    motorKw: row.motorKw === null ? null : Number(row.motorKw),
+    repairEstimateMinor: result.repairEstimate.total.currency === row.machineCurrency ? result.repairEstimate.total.amountMinor : null,
+    inspectedOn,
+    validityDays: settings?.validityDays ?? DEFAULT_VALIDITY_DAYS,
+    listedAt: row.listedAt,
+    listingStatus: row.listingStatus,
+    movingSheet: moving ?? null,
+    inclusions,
+  };
+}
+
+export type ReportDecisionFacts = NonNullable<Awaited<ReturnType<typeof findReportDecisionFacts>>>;
