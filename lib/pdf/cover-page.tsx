@@ -2,6 +2,7 @@ import { Text, View } from '@react-pdf/renderer';
 import { formatDate, formatMoney } from '@/lib/format';
 import type { Money } from '@/lib/scoring';
 import { ConditionScaleMark, gradeColour } from './condition-scale-mark';
+import { DealBreakersBlock } from './deal-breakers-block';
 import { FramedPage, WaygradeMark, type FrameFacts } from './page-frame';
 import { pdfText } from './pdf-text';
 import type { ReportDocumentData } from './report-document-data';
@@ -51,6 +52,8 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
           .filter(Boolean)
           .join(' · ')}
       </Text>
+
+      <DealBreakersBlock result={r} />
 
       <View style={{ flexDirection: 'row', marginTop: 12 }}>
         <View style={{ ...styles.panel, flexGrow: 1, flexBasis: 0, marginRight: 10, borderLeftWidth: 3, borderLeftColor: gradeColour(grade) }}>

@@ -4,6 +4,7 @@ import { BandMark } from './band-mark';
 import { gradeColour } from './condition-scale-mark';
 import { FramedPage, SectionHeading, type FrameFacts } from './page-frame';
 import { pdfText } from './pdf-text';
+import { NotInspectedAreas, ReportStatementsBlock } from './report-statements-block';
 import { COLOURS, styles } from './theme';
 
 function qRange(index: number) {
@@ -57,6 +58,8 @@ export function ReadingGuidePage({ result, frame }: { result: ScoringResult; fra
         document; or &quot;common practice&quot; where the trade has no published figure.
       </Text>
 
+      <ReportStatementsBlock />
+
       <Text style={styles.h3}>Overall</Text>
       <Text>{pdfText(result.overall.explanation)}</Text>
 
@@ -74,6 +77,7 @@ export function ReadingGuidePage({ result, frame }: { result: ScoringResult; fra
 
       <Text style={styles.h3}>Confidence: {Math.round(result.confidence.value * 100)} %</Text>
       <Text>{pdfText(result.confidence.explanation)}</Text>
+      <NotInspectedAreas result={result} />
       {result.confidence.missing.length > 0 ? (
         <View style={{ marginTop: 6 }}>
           <View style={{ flexDirection: 'row', paddingBottom: 2, borderBottomWidth: 1, borderBottomColor: COLOURS.lineStrong }}>
