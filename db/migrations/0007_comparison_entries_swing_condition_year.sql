@@ -1,0 +1,2 @@
+DROP INDEX `comparison_entries_swing_idx` ON `comparison_entries`;--> statement-breakpoint
+CREATE INDEX `comparison_entries_swing_condition_year_idx` ON `comparison_entries` (`swing_mm`,`overall_condition`,`year_built`);
