@@ -136,3 +136,36 @@ describe('the dealers’ comparison table', () => {
     await phone.close();
   });
 });
+
+describe('the coordinators’ market data', () => {
+  afterAll(closeDatabase);
+
+  it('records a sale and imports a CSV, showing the rejected row and why', async () => {
+    const browser = await openBrowser({ width: 1280, height: 900 });
+    const page = await browser.newPage();
+    await signIn(page, 'nadia.ferrand@waygrade.example', PASSWORD);
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Market data' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Market data' }).waitFor();
+    const mark = `E2E ${Date.now().toString(36)}`;
+
+    const form = page.getByRole('form', { name: 'Record a comparable sale' });
+    await form.getByLabel('Machine sold').fill(`${mark} Corvane CL-330, 2001`);
+    await form.getByLabel('Swing over bed (mm)').fill('330');
+    await form.getByLabel('Price (whole units)').fill('7900');
+    await form.getByLabel('Date sold').fill('2025-05-14');
+    await form.getByRole('button', { name: 'Record sale' }).click();
+    await form.getByRole('status').filter({ hasText: 'Recorded' }).waitFor();
+
+    const csv = [
+      'description,swing_mm,between_centres_mm,year_built,condition,sale_kind,price,currency,sold_on,region,source',
+      `${mark} Oldreth T400,400,1000,1986,Fair,private,5600,EUR,2025-02-02,Brenmark,`,
+      `${mark} Vantor Meridian 360,360,,1999,Gleaming,auction,8800,EUR,2025-03-03,,`,
+    ].join('\n');
+    await page.getByLabel('CSV file').setInputFiles({ name: 'sales.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await page.getByRole('button', { name: 'Import' }).click();
+    await page.getByText('Imported 1 sale').waitFor();
+    await page.locator('[data-rejected-line="line 3"]').filter({ hasText: 'condition' }).waitFor();
+    await screenshot(page, 'market-data');
+    await browser.close();
+  });
+});

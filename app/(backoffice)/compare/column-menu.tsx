@@ -13,7 +13,7 @@ const GROUPS: ReadonlyArray<[ColumnMeta['group'], string]> = [
 export function ColumnMenu({ visibility, onChange }: { visibility: VisibilityState; onChange: (next: VisibilityState) => void }) {
   const hidden = Object.values(visibility).filter((v) => v === false).length;
   return (
-    <details className="relative">
+    <details className="relative hidden md:block">
       <summary className="inline-flex min-h-touch cursor-pointer list-none items-center gap-2 rounded-lg border border-line-strong bg-paper-raised px-4 font-medium hover:bg-paper-sunken">
         Columns{hidden ? <span className="figures text-sm text-ink-soft">({hidden} hidden)</span> : null}
       </summary>
