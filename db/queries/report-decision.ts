@@ -1,9 +1,9 @@
 import 'server-only';
 import { asc, eq } from 'drizzle-orm';
 import { db } from '@/db/client';
-import { inspections, machineInclusions, machineMovingSheets, machines, reports, reportSettings, surveys } from '@/db/schema';
+import { inspections, machineInclusions, machinePriceChanges, machineMovingSheets, machines, reports, surveys } from '@/db/schema';
 import type { SupplySpec } from '@/lib/decision/phase-converter';
-import { DEFAULT_VALIDITY_DAYS } from '@/lib/decision/report-currency';
+import { findReportValidityDays } from './report-settings';
 import type { ScoringResult } from '@/lib/scoring';
 
 /** The nameplate supply the inspector recorded in the survey, if any. */
@@ -45,7 +45,12 @@ export async function findReportDecisionFacts(reportId: number) {
   const surveyData = typeof row.surveyData === 'string' ? JSON.parse(row.surveyData) : row.surveyData;
   const [moving] = await db.select().from(machineMovingSheets).where(eq(machineMovingSheets.machineId, row.machineId)).limit(1);
   const inclusions = await db.select().from(machineInclusions).where(eq(machineInclusions.machineId, row.machineId)).orderBy(asc(machineInclusions.id));
-  const [settings] = await db.select({ validityDays: reportSettings.validityDays }).from(reportSettings).where(eq(reportSettings.id, 1)).limit(1);
+  const priceHistory = await db
+    .select({ askingPriceMinor: machinePriceChanges.askingPriceMinor, currency: machinePriceChanges.currency, changedAt: machinePriceChanges.createdAt })
+    .from(machinePriceChanges)
+    .where(eq(machinePriceChanges.machineId, row.machineId))
+    .orderBy(asc(machinePriceChanges.createdAt), asc(machinePriceChanges.id));
+  const validityDays = await findReportValidityDays();
   const inspectedOn = result.machine.inspectedOn ? new Date(`${result.machine.inspectedOn.slice(0, 10)}T00:00:00Z`) : (row.scheduledAt ?? row.surveySubmittedAt ?? row.releasedAt);
   return {
     machineId: row.machineId,
@@ -56,11 +61,12 @@ export async function findReportDecisionFacts(reportId: number) {
     motorKw: row.motorKw === null ? null : Number(row.motorKw),
     repairEstimateMinor: result.repairEstimate.total.currency === row.machineCurrency ? result.repairEstimate.total.amountMinor : null,
     inspectedOn,
-    validityDays: settings?.validityDays ?? DEFAULT_VALIDITY_DAYS,
+    validityDays,
     listedAt: row.listedAt,
     listingStatus: row.listingStatus,
     movingSheet: moving ?? null,
     inclusions,
+    priceHistory,
   };
 }
 

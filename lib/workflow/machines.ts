@@ -1,7 +1,7 @@
 import 'server-only';
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { machines } from '@/db/schema';
+import { machinePriceChanges, machines } from '@/db/schema';
 import { defineOperation } from '@/lib/auth/operation';
 import { sizeClassForSwing } from '@/lib/machine-size';
 import { machineFormSchema, type MachineForm } from '@/lib/validation/machine';
@@ -36,7 +36,9 @@ export const createMachine = defineOperation({
   access: 'machine.edit.own',
   input: machineFormSchema,
   async run({ actor, input, tx }) {
-    const [row] = await tx.insert(machines).values({ ...machineValues(input), sellerId: actor!.id }).$returningId();
+    const values = machineValues(input);
+    const [row] = await tx.insert(machines).values({ ...values, sellerId: actor!.id }).$returningId();
+    await tx.insert(machinePriceChanges).values({ machineId: row!.id, askingPriceMinor: values.askingPriceMinor });
     return { data: { machineId: row!.id }, entityId: row!.id };
   },
 });
@@ -48,7 +50,13 @@ export const updateMachine = defineOperation({
   input: machineFormSchema.extend({ machineId: z.coerce.number().int().positive() }),
   authorize: ({ actor, input }) => ownsMachine(actor, input.machineId),
   async run({ input, tx }) {
-    await tx.update(machines).set(machineValues(input)).where(eq(machines.id, input.machineId));
+    const values = machineValues(input);
+    const [before] = await tx.select({ askingPriceMinor: machines.askingPriceMinor }).from(machines).where(eq(machines.id, input.machineId)).for('update');
+    await tx.update(machines).set(values).where(eq(machines.id, input.machineId));
+    // Price history: a row only when the asking price actually changes.
+    if (before && before.askingPriceMinor !== values.askingPriceMinor) {
+      await tx.insert(machinePriceChanges).values({ machineId: input.machineId, askingPriceMinor: values.askingPriceMinor });
+    }
     return { data: { machineId: input.machineId }, entityId: input.machineId };
   },
 });

@@ -182,6 +182,7 @@ const RULES: Record<string, Rule> = {
 
   'app/(backoffice)/account/shop-supply-actions.ts#saveShopSupplyAction': { kind: 'action', allowed: ['buyer', 'dealer'], input: () => ({ supplyVoltage: 230, supplyPhases: 1 }) },
 
+  'app/(backoffice)/admin/fees/validity-actions.ts#setReportValidityAction': { kind: 'action', allowed: ['admin'], input: () => ({ validityDays: 90 }) },
   // Machines and requests: sellers, and only for their own machines.
   'app/(backoffice)/machines/actions.ts#createMachineAction': { kind: 'action', allowed: ['seller'], input: () => MACHINE_FORM },
   'app/(backoffice)/machines/actions.ts#updateMachineAction': {

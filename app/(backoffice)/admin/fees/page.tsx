@@ -7,7 +7,9 @@ import { SIZE_CLASSES } from '@/db/schema';
 import { requirePageSession } from '@/lib/auth/session';
 import { SIZE_CLASS_LABELS } from '@/lib/machine-size';
 import { can } from '@/lib/roles';
+import { findReportValidityDays } from '@/db/queries/report-settings';
 import { FeeForm } from './fee-form';
+import { ValidityForm } from './validity-form';
 
 export const metadata: Metadata = { title: 'Report fees' };
 
@@ -15,6 +17,7 @@ export default async function FeesPage() {
   const user = await requirePageSession();
   if (!can(user.role, 'fees.manage')) notFound();
   const fees = await listInspectionFees(db);
+  const validityDays = await findReportValidityDays();
   return (
     <>
       <p className="text-sm font-semibold uppercase tracking-widest text-copper">Coordinator</p>
@@ -37,6 +40,10 @@ export default async function FeesPage() {
             );
           })}
         </div>
+      </Card>
+      <Card title="How long a report stays current" className="mt-6 max-w-2xl">
+        <p className="mb-4 text-ink-soft">Counted from the inspection day. After it, the report page shows the machine may have changed since.</p>
+        <ValidityForm validityDays={validityDays} />
       </Card>
     </>
   );

@@ -13,7 +13,8 @@ export interface LandedCostFacts {
   currency: string;
   askingPriceMinor: number | null;
   repairsMinor: number | null;
-  missingToolingMinor: number;
+  /** null when the seller has listed no inclusions, so nothing is known to be missing. */
+  missingToolingMinor: number | null;
   supply: SupplyAssessment;
   weightKg: number | null;
   siteAccess: SiteAccess;
@@ -75,7 +76,7 @@ export function LandedCostPanel({ facts }: { facts: LandedCostFacts }) {
         taxPercent: toNumber(tax),
         rigging: rigging?.total ?? null,
         converter: converter && converter.currency === c ? converter : null,
-        missingTooling: { amountMinor: facts.missingToolingMinor, currency: c },
+        missingTooling: facts.missingToolingMinor === null ? null : { amountMinor: facts.missingToolingMinor, currency: c },
         repairs: facts.repairsMinor === null ? null : { amountMinor: facts.repairsMinor, currency: c },
       });
       return { ok: true as const, rigging, cost };
