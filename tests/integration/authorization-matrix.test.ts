@@ -203,6 +203,12 @@ const RULES: Record<string, Rule> = {
     input: async (c) => ({ ...DISCLOSURE_FORM, machineId: await newMachine(sellerOf(c).id) }),
     others: { allowed: [], input: async (c) => ({ ...DISCLOSURE_FORM, machineId: await newMachine(c.fx.otherSeller.id) }) },
   },
+  'app/(backoffice)/machines/[machineId]/moving/actions.ts#saveMovingSheetAction': {
+    kind: 'action',
+    allowed: ['seller'],
+    input: async (c) => ({ weightKg: 1850, heavyEnd: 'headstock', siteAccess: 'ground-level-wide', machineId: await newMachine(sellerOf(c).id) }),
+    others: { allowed: [], input: async (c) => ({ weightKg: 1850, heavyEnd: 'headstock', siteAccess: 'ground-level-wide', machineId: await newMachine(c.fx.otherSeller.id) }) },
+  },
   'app/(backoffice)/machines/actions.ts#cancelInspectionAction': {
     kind: 'action',
     allowed: ['seller', 'admin'],

@@ -51,6 +51,9 @@ export default async function MachinePage({ params }: { params: Promise<{ machin
           <ButtonLink href={`/machines/${machine.id}/disclosure`} variant="secondary">
             Seller’s disclosure
           </ButtonLink>
+          <ButtonLink href={`/machines/${machine.id}/moving`} variant="secondary">
+            Moving sheet
+          </ButtonLink>
           {!open && user.role === 'seller' ? <ButtonLink href={`/machines/${machine.id}/request`}>Request an inspection</ButtonLink> : null}
         </div>
       </div>
