@@ -25,3 +25,9 @@ export async function countSurveyPhotos(reader: Reader, inspectionId: number) {
   const [row] = await reader.select({ total: count() }).from(photos).where(eq(photos.inspectionId, inspectionId));
   return row?.total ?? 0;
 }
+
+/** Photos kept for each section of one survey, by section id. */
+export async function countSurveyPhotosBySection(reader: Reader, inspectionId: number): Promise<Record<string, number>> {
+  const rows = await reader.select({ section: photos.section, total: count() }).from(photos).where(eq(photos.inspectionId, inspectionId)).groupBy(photos.section);
+  return Object.fromEntries(rows.filter((r) => r.section !== null).map((r) => [r.section!, r.total]));
+}

@@ -61,6 +61,7 @@ export {
   type LevelProfile,
   type ProfileShape,
 } from './measure/level-profile';
+export { wayWearProfile, type WayWear, type WayWearPoint } from './measure/way-wear';
 export { leastSquaresLine, type Line, type Point } from './measure/least-squares-line';
 export { scaleTolerance, IS_6040_SCALING_RULE, type ScaledTolerance, type ScalingRule } from './measure/tolerance-scaling';
 export { deviationRatio, ratioFromKnots, type AllowedDirection } from './measure/deviation-ratio';

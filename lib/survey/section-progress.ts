@@ -3,7 +3,9 @@ import { SURVEY_SECTIONS, type SurveySectionId } from './survey-sections';
 /** A section counts as started once it holds any value; identity once the nameplate date is set. */
 const STARTED: Readonly<Record<SurveySectionId, (survey: Record<string, unknown>) => boolean>> = {
   identity: (s) => Boolean(s.machine),
+  hiddenDamage: (s) => hasAny(s.hiddenDamage) || hasAny(s.dealBreakers),
   lubrication: (s) => hasAny(s.lubrication),
+  powerRun: (s) => hasAny(s.powerRun),
   gearboxAndFeeds: (s) => hasAny(s.gearboxAndFeeds),
   drive: (s) => hasAny(s.drive),
   bedAndWays: (s) => hasAny(s.bedAndWays),

@@ -1,6 +1,8 @@
 import { latheSurveySchema } from '@/lib/scoring';
 import type { DraftSurvey } from './draft-survey-schema';
 import { missingMandatoryItems } from './mandatory-items';
+import { findingsNeedingPhotos } from './hidden-damage';
+import { powerRunRecorded, safetyGateConfirmed } from './safety-gate';
 import { SURVEY_SECTION_IDS, sectionById, type SurveySectionId } from './survey-sections';
 
 /**
@@ -77,9 +79,27 @@ function describePath(path: readonly PropertyKey[]): string {
   return `${words.join(': ') || sectionById(sectionOfPath(path))?.title || 'Survey'}${where}`;
 }
 
-export function submissionBlockers(survey: DraftSurvey, context: { photoCount: number }): SubmissionBlocker[] {
+export interface SubmissionContext {
+  photoCount: number;
+  /** Photos kept for each survey section, by section id. */
+  sectionPhotoCounts?: Readonly<Partial<Record<string, number>>>;
+}
+
+export function submissionBlockers(survey: DraftSurvey, context: SubmissionContext): SubmissionBlocker[] {
   const missing = missingMandatoryItems(survey, context);
   const blockers: SubmissionBlocker[] = missing.map((item) => ({ section: item.section, text: item.label }));
+  // Every "yes" on the hidden-damage list or the deal-breakers needs a photo of its own as evidence.
+  const yes = findingsNeedingPhotos(survey);
+  const photos = context.sectionPhotoCounts?.hiddenDamage ?? 0;
+  if (yes.length > photos) {
+    blockers.push({
+      section: 'hiddenDamage',
+      text: `A photo for every “yes”: ${yes.length} answered yes (${yes.join(', ')}), ${photos} ${photos === 1 ? 'photo' : 'photos'} in this section`,
+    });
+  }
+  if (powerRunRecorded(survey) && !safetyGateConfirmed(survey)) {
+    blockers.push({ section: 'powerRun', text: 'Safety gate: confirm every item before the power run' });
+  }
   const covered = missing.flatMap((item) => item.covers ?? []);
   const strict = latheSurveySchema.safeParse(survey);
   if (!strict.success) {

@@ -8,7 +8,9 @@ import type { Hazard } from './safety-cautions';
  */
 export const SURVEY_SECTION_IDS = [
   'identity',
+  'hiddenDamage',
   'lubrication',
+  'powerRun',
   'gearboxAndFeeds',
   'drive',
   'bedAndWays',
@@ -44,6 +46,15 @@ export const SURVEY_SECTIONS: readonly SurveySection[] = [
     photoHint: 'The whole machine, and the nameplate close up.',
   },
   {
+    id: 'hiddenDamage',
+    title: 'Hidden damage and deal-breakers',
+    summary: 'Walk round the machine: repairs and damage a seller may not mention, and the faults that end a deal.',
+    hazards: [],
+    hasLengths: false,
+    checks: [],
+    photoHint: 'One photo for every “yes”, close enough to see the damage.',
+  },
+  {
     id: 'lubrication',
     title: 'Headstock and lubrication',
     summary: 'Open the headstock cover: oil level and colour, metal, sludge, pump, filter, leaks.',
@@ -51,6 +62,15 @@ export const SURVEY_SECTIONS: readonly SurveySection[] = [
     hasLengths: false,
     checks: ['headstock-oil-level', 'headstock-oil-condition', 'headstock-metal-particles', 'oil-pump', 'oil-filter-screen', 'oil-leaks', 'oil-cleanliness', 'oil-viscosity', 'oil-water'],
     photoHint: 'Inside the headstock, the sight window, any sludge or metal.',
+  },
+  {
+    id: 'powerRun',
+    title: 'Power run',
+    summary: 'Start the machine: cold or warm, minutes run before the readings, noise and housing temperature in each speed range.',
+    hazards: ['rotating'],
+    hasLengths: false,
+    checks: [],
+    photoHint: 'The thermometer on the headstock housing, the speed chart.',
   },
   {
     id: 'gearboxAndFeeds',
@@ -134,6 +154,12 @@ export const SURVEY_SECTIONS: readonly SurveySection[] = [
     photoHint: 'Everything that comes with the machine, laid out.',
   },
 ];
+
+/**
+ * Sections whose steps run the machine under power. They stay locked until the inspector has
+ * confirmed the safety gate (guards, chuck key, work secure, emergency stop and brake, earth).
+ */
+export const POWER_ON_SECTIONS: readonly SurveySectionId[] = ['powerRun', 'gearboxAndFeeds', 'spindle', 'testCuts'];
 
 export function sectionById(id: string): SurveySection | undefined {
   return SURVEY_SECTIONS.find((section) => section.id === id);

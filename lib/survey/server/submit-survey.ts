@@ -1,7 +1,7 @@
 import 'server-only';
 import { insertDraftReport } from '@/db/queries/report-writes';
 import { loadScoreOptions } from '@/db/queries/scoring-inputs';
-import { countSurveyPhotos } from '@/db/queries/survey-photos';
+import { countSurveyPhotos, countSurveyPhotosBySection } from '@/db/queries/survey-photos';
 import { findInspectionWithMachine, findSurvey, listActiveCoordinators, markSurveySubmitted, moveInspectionStatus } from '@/db/queries/surveys';
 import { defineOperation } from '@/lib/auth/operation';
 import { AppError } from '@/lib/errors';
@@ -40,7 +40,10 @@ export const submitSurvey = defineOperation({
 
     const draft = draftSurveySchema.safeParse(survey.data);
     const blockers = draft.success
-      ? submissionBlockers(draft.data, { photoCount: await countSurveyPhotos(tx, inspection.id) })
+      ? submissionBlockers(draft.data, {
+          photoCount: await countSurveyPhotos(tx, inspection.id),
+          sectionPhotoCounts: await countSurveyPhotosBySection(tx, inspection.id),
+        })
       : [{ section: 'identity' as const, text: 'The saved survey could not be read; open it again and re-enter the last values.' }];
     if (blockers.length > 0) {
       const bySection: Record<string, string[]> = {};

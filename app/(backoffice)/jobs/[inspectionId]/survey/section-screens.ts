@@ -6,6 +6,8 @@ import { BedSection } from './sections/bed-section';
 import { DriveSection } from './sections/drive-section';
 import { ElectricalSection } from './sections/electrical-section';
 import { GearboxSection } from './sections/gearbox-section';
+import { HiddenDamageSection } from './sections/hidden-damage-section';
+import { PowerRunSection } from './sections/power-run-section';
 import { IdentitySection } from './sections/identity-section';
 import { LubricationSection } from './sections/lubrication-section';
 import { SlidesSection } from './sections/slides-section';
@@ -16,7 +18,9 @@ import { TestCutsSection } from './sections/test-cuts-section';
 /** The screen for each survey section. */
 export const SECTION_SCREENS: Readonly<Record<SurveySectionId, ComponentType<{ form: SurveyForm }>>> = {
   identity: IdentitySection,
+  hiddenDamage: HiddenDamageSection,
   lubrication: LubricationSection,
+  powerRun: PowerRunSection,
   gearboxAndFeeds: GearboxSection,
   drive: DriveSection,
   bedAndWays: BedSection,
@@ -31,7 +35,9 @@ export const SECTION_SCREENS: Readonly<Record<SurveySectionId, ComponentType<{ f
 /** Where each section keeps its data in the survey (identity spans the machine and the instruments). */
 export const SECTION_DATA_KEYS: Readonly<Record<SurveySectionId, readonly string[]>> = {
   identity: ['machine', 'instruments'],
+  hiddenDamage: ['hiddenDamage', 'dealBreakers'],
   lubrication: ['lubrication'],
+  powerRun: ['powerRun'],
   gearboxAndFeeds: ['gearboxAndFeeds'],
   drive: ['drive'],
   bedAndWays: ['bedAndWays'],

@@ -19,6 +19,7 @@ export function SubmitStep({
   form,
   data,
   photoCount,
+  sectionPhotoCounts,
   saveState,
   confirmedVersion,
   onGoTo,
@@ -27,6 +28,7 @@ export function SubmitStep({
   form: SurveyForm;
   data: DraftSurvey;
   photoCount: number;
+  sectionPhotoCounts: Readonly<Record<string, number>>;
   saveState: SaveState;
   confirmedVersion: () => number;
   onGoTo: (section: SurveySectionId) => void;
@@ -34,7 +36,7 @@ export function SubmitStep({
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [serverProblem, setServerProblem] = useState<{ message: string; bySection?: Record<string, string[]> } | null>(null);
-  const blockers = submissionBlockers(data, { photoCount });
+  const blockers = submissionBlockers(data, { photoCount, sectionPhotoCounts });
   const bySection = new Map<SurveySectionId, string[]>();
   for (const blocker of blockers) bySection.set(blocker.section, [...(bySection.get(blocker.section) ?? []), blocker.text]);
   const saved = saveState.kind === 'saved';

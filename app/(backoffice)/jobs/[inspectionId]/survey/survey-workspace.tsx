@@ -6,12 +6,14 @@ import type { DraftSurvey } from '@/lib/survey/draft-survey-schema';
 import { scorableDraft } from '@/lib/survey/scorable-draft';
 import { sectionsStarted } from '@/lib/survey/section-progress';
 import { sectionUnitOf, withSectionUnit, type SectionUnit } from '@/lib/survey/section-unit';
-import { SURVEY_SECTIONS, type SurveySectionId } from '@/lib/survey/survey-sections';
+import { POWER_ON_SECTIONS, SURVEY_SECTIONS, type SurveySectionId } from '@/lib/survey/survey-sections';
+import { safetyGateConfirmed } from '@/lib/survey/safety-gate';
 import type { SurveyPhoto } from '@/lib/survey/survey-photo';
 import { getAt, setAt, type SurveyPath } from '@/lib/survey/survey-paths';
 import type { SurveyForm } from './fields/survey-form';
 import { SectionChecks } from './live/section-checks';
 import { SafetyCautionsPanel } from './safety-cautions-panel';
+import { SafetyGate } from './safety-gate';
 import { SaveNotice, SaveStatus } from './save-status';
 import { SECTION_DATA_KEYS, SECTION_SCREENS } from './section-screens';
 import { SectionPhotos } from './section-photos';
@@ -21,6 +23,12 @@ import { UnitSwitch } from './unit-switch';
 import { useSurveyAutosave } from './use-survey-autosave';
 
 const SUBMIT_STEP = SURVEY_SECTIONS.length;
+
+function photoCountsBySection(photos: readonly SurveyPhoto[]): Record<string, number> {
+  const counts: Record<string, number> = {};
+  for (const photo of photos) counts[photo.section] = (counts[photo.section] ?? 0) + 1;
+  return counts;
+}
 
 function unitsFrom(data: DraftSurvey): Record<SurveySectionId, SectionUnit> {
   const record = data as Record<string, unknown>;
@@ -98,6 +106,8 @@ export function SurveyWorkspace({
   }
 
   const Screen = section ? SECTION_SCREENS[section.id] : null;
+  const powerOn = section ? POWER_ON_SECTIONS.includes(section.id) : false;
+  const gateOpen = safetyGateConfirmed(data);
   const sectionChecks: CheckResult[] = section && checksById ? section.checks.map((id) => checksById.get(id)).filter((c): c is CheckResult => Boolean(c)) : [];
   const nextTitle = step + 1 < SUBMIT_STEP ? SURVEY_SECTIONS[step + 1]!.title : 'Check and submit';
 
@@ -125,7 +135,14 @@ export function SurveyWorkspace({
           <>
             <SafetyCautionsPanel hazards={section.hazards} />
             {section.hasLengths ? <UnitSwitch unit={unit} onChange={changeUnit} /> : null}
-            <Screen key={`${section.id}-${revision}-${unit}`} form={form} />
+            {powerOn ? <SafetyGate form={form} /> : null}
+            {powerOn && !gateOpen ? (
+              <p className="rounded-lg border border-line-strong bg-paper-sunken px-4 py-3 font-medium" data-testid="power-on-locked">
+                <span aria-hidden="true">■ </span>Locked until the safety gate above is confirmed.
+              </p>
+            ) : (
+              <Screen key={`${section.id}-${revision}-${unit}`} form={form} />
+            )}
             {section.checks.length ? <SectionChecks checks={sectionChecks} ready={Boolean(checksById)} /> : null}
             <SectionPhotos
               inspectionId={inspectionId}
@@ -142,6 +159,7 @@ export function SurveyWorkspace({
             form={form}
             data={data}
             photoCount={photos.length}
+            sectionPhotoCounts={photoCountsBySection(photos)}
             saveState={state}
             confirmedVersion={saver.confirmedVersion}
             onGoTo={(id) => go(SURVEY_SECTIONS.findIndex((s) => s.id === id))}

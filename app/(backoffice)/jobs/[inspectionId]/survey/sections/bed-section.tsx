@@ -6,6 +6,7 @@ import { ReadingsInput } from '../fields/readings-input';
 import type { SurveyForm } from '../fields/survey-form';
 import { BedLiveResults } from '../live/bed-live-results';
 import { WEAR } from './rubrics';
+import { BedWearFields } from './bed-wear-fields';
 import { FieldGroup } from './field-group';
 
 const at = (...path: string[]) => ['bedAndWays', ...path];
@@ -45,6 +46,7 @@ export function BedSection({ form }: { form: SurveyForm }) {
         <LengthField form={form} path={at('stepNearChuck')} label="Depth of the worn step near the chuck" hint="Feeler gauge or indicator across the step; leave empty if none" />
         <RatingField form={form} path={at('carriageWear')} label="Carriage fit" hint="Gibs at the end of adjustment, tight toward the tailstock" rubric={WEAR} />
       </FieldGroup>
+      <BedWearFields form={form} />
     </div>
   );
 }
