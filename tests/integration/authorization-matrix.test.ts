@@ -25,7 +25,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { and, count, eq, gt } from 'drizzle-orm';
 import { NextRequest } from 'next/server';
 import { closeDatabase, db } from '@/db/client';
-import { auditEvents, inspections, machines, reportAccessGrants, reports, shortlists, users } from '@/db/schema';
+import { auditEvents, inspections, machineInclusions, machines, reportAccessGrants, reports, shortlists, users } from '@/db/schema';
 import { ERROR_CODES } from '@/lib/errors';
 import { ROLES, type Role } from '@/db/schema/users';
 import type { InspectionStatus } from '@/db/schema/inspections';
@@ -90,6 +90,12 @@ async function newMachine(sellerId: string) {
   return row!.id;
 }
 
+async function newInclusion(sellerId: string) {
+  const machineId = await newMachine(sellerId);
+  const [row] = await db.insert(machineInclusions).values({ machineId, kind: 'chuck', description: 'Matrix chuck', condition: 'good' }).$returningId();
+  return row!.id;
+}
+
 async function newInspection(sellerId: string, status: InspectionStatus, inspectorId: string | null = null) {
   const machineId = await newMachine(sellerId);
   const [row] = await db
@@ -136,6 +142,7 @@ const comparerOf = (c: Context) => (c.actor?.role === 'dealer' || c.actor?.role 
 const inspectorOf = (c: Context) => (c.actor?.role === 'inspector' ? c.actor : c.fx.accounts.inspector);
 const tomorrow = () => new Date(Date.now() + 86_400_000).toISOString().slice(0, 10);
 
+const INCLUSION_FORM = { kind: 'chuck', description: '250 mm 3-jaw chuck', condition: 'good', replacementCost: 600 };
 const DISCLOSURE_FORM = { hasKnownFaults: 'no', hasRepairs: 'no', hasCrashes: 'no', usage: 'hobby', supplyVoltage: 400, supplyPhases: 3, included: 'Chuck', saleTerm: 'as-is' };
 const MACHINE_FORM = { maker: 'Matrixwerk', model: 'MX-330', latheKind: 'general_purpose', swingMm: 330, betweenCentresMm: 1000, town: 'Lowmere', region: 'Brenmark', listingStatus: 'draft' };
 // The smallest survey draft the survey format accepts.
@@ -208,6 +215,18 @@ const RULES: Record<string, Rule> = {
     allowed: ['seller'],
     input: async (c) => ({ weightKg: 1850, heavyEnd: 'headstock', siteAccess: 'ground-level-wide', machineId: await newMachine(sellerOf(c).id) }),
     others: { allowed: [], input: async (c) => ({ weightKg: 1850, heavyEnd: 'headstock', siteAccess: 'ground-level-wide', machineId: await newMachine(c.fx.otherSeller.id) }) },
+  },
+  'app/(backoffice)/machines/[machineId]/inclusions/actions.ts#addInclusionAction': {
+    kind: 'action',
+    allowed: ['seller'],
+    input: async (c) => ({ ...INCLUSION_FORM, machineId: await newMachine(sellerOf(c).id) }),
+    others: { allowed: [], input: async (c) => ({ ...INCLUSION_FORM, machineId: await newMachine(c.fx.otherSeller.id) }) },
+  },
+  'app/(backoffice)/machines/[machineId]/inclusions/actions.ts#removeInclusionAction': {
+    kind: 'action',
+    allowed: ['seller'],
+    input: async (c) => ({ inclusionId: await newInclusion(sellerOf(c).id) }),
+    others: { allowed: [], input: async (c) => ({ inclusionId: await newInclusion(c.fx.otherSeller.id) }) },
   },
   'app/(backoffice)/machines/actions.ts#cancelInspectionAction': {
     kind: 'action',

@@ -54,6 +54,9 @@ export default async function MachinePage({ params }: { params: Promise<{ machin
           <ButtonLink href={`/machines/${machine.id}/moving`} variant="secondary">
             Moving sheet
           </ButtonLink>
+          <ButtonLink href={`/machines/${machine.id}/inclusions`} variant="secondary">
+            What comes with it
+          </ButtonLink>
           {!open && user.role === 'seller' ? <ButtonLink href={`/machines/${machine.id}/request`}>Request an inspection</ButtonLink> : null}
         </div>
       </div>

@@ -19,6 +19,7 @@ import { DealBreakersPanel } from './deal-breakers-panel';
 import { ReportStatements } from './report-statements';
 import { CurrencyBanner } from './currency-banner';
 import { DisclosurePanel } from './disclosure-panel';
+import { InclusionsPanel } from './inclusions-panel';
 import { LandedCostPanel } from './landed-cost-panel';
 
 export const metadata: Metadata = { title: 'Report summary' };
@@ -162,6 +163,7 @@ export default async function ReportSummaryPage({
       {facts && showsFindings ? (
         <DisclosurePanel assessments={disclosure ? assessDisclosure(disclosure, facts.result, facts.nameplate) : null} answeredOn={disclosure?.updatedAt ?? null} />
       ) : null}
+      {facts && showsFindings ? <InclusionsPanel items={facts.inclusions} currency={facts.currency} /> : null}
       {facts && showsFindings ? (
         <LandedCostPanel
           facts={{
