@@ -11,7 +11,7 @@ import { screenshot } from './browser';
 // cross-role journey: cautions, live results, a photo, a lost signal mid-section, and submission.
 
 /** A small real JPEG, as a phone camera would hand over. */
-async function photoFile() {
+export async function photoFile() {
   const file = path.join(mkdtempSync(path.join(os.tmpdir(), 'waygrade-photo-')), 'headstock-nameplate.jpg');
   const bytes = await sharp({ create: { width: 1200, height: 900, channels: 3, background: { r: 120, g: 110, b: 96 } } })
     .jpeg({ quality: 80 })
@@ -23,6 +23,15 @@ async function photoFile() {
 async function next(page: Page, title: string) {
   await page.getByRole('button', { name: /^Next:/ }).click();
   await page.getByRole('heading', { level: 1, name: title }).waitFor();
+}
+
+/** Ticks every item of the safety gate and waits for the power-on inputs to open. */
+export async function confirmSafetyGate(page: Page) {
+  const gate = page.getByTestId('safety-gate');
+  for (const item of ['Guards and covers on', 'Chuck key out', 'Work and chuck secure', 'Emergency stop and brake tested', 'Earth checked']) {
+    await gate.getByRole('checkbox', { name: new RegExp(`^${item}`) }).check();
+  }
+  await page.locator('[data-testid="safety-gate"][data-confirmed="true"]').waitFor();
 }
 
 export async function savedSurvey(page: Page, inspectionId: string) {
@@ -49,6 +58,9 @@ export async function fillEverySectionAndSubmit(page: Page, context: BrowserCont
     await waitUntilSaved(page);
     await shot('survey-02-identity');
 
+    // Hidden damage and deal-breakers: nothing found on this machine, so nothing is answered.
+    await next(page, 'Hidden damage and deal-breakers');
+
     // 2. Headstock and lubrication: the isolation and used-oil cautions come before the inputs.
     await next(page, 'Headstock and lubrication');
     await expect(page.getByTestId('safety-cautions').textContent()).resolves.toContain('Isolate before opening covers');
@@ -57,6 +69,14 @@ export async function fillEverySectionAndSubmit(page: Page, context: BrowserCont
     await page.getByRole('group', { name: 'Oil pump and lines' }).getByRole('button', { name: /^Works/ }).click();
     await page.getByTestId('section-checks').getByText('Headstock oil level').waitFor();
     await shot('survey-03-lubrication');
+
+    // Power run: locked until the safety gate is confirmed; the gate then opens every power-on section.
+    await next(page, 'Power run');
+    await page.getByTestId('power-on-locked').waitFor();
+    await confirmSafetyGate(page);
+    await page.getByRole('group', { name: 'Machine at the start' }).getByRole('button', { name: /^Cold/ }).click();
+    await page.getByLabel('Minutes run before the readings').fill('20');
+    await shot('survey-03b-power-run');
 
     // 3. Gearbox and feeds
     await next(page, 'Gearbox and feeds');
