@@ -55,6 +55,6 @@ describe('comparisonCsv', () => {
 
   it('keeps a maker that looks like a spreadsheet formula from running', () => {
     const [line] = parse(comparisonCsv([row({ maker: '=HYPERLINK("x")' })]));
-    expect(line!.Maker.startsWith("'=")).toBe(true);
+    expect(line!.Maker).toMatch(/^'=/);
   });
 });
