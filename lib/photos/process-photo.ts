@@ -40,13 +40,34 @@ export interface ProcessedVariant {
 
 export type ProcessedPhoto = Record<PhotoVariant, ProcessedVariant>;
 
-async function render(input: Uint8Array, variant: PhotoVariant): Promise<ProcessedVariant> {
-  const spec = PHOTO_VARIANTS[variant];
-  // rotate() with no angle applies the EXIF orientation; sharp writes no metadata unless asked.
-  const pipeline = sharp(input, { failOn: 'error', limitInputPixels: MAX_INPUT_PIXELS })
+type Decoded = { pixels: Buffer; width: number; height: number; channels: 1 | 2 | 3 | 4 };
+
+/**
+ * Decodes the photo once: turned upright from the camera's orientation tag (rotate() with no
+ * angle) and brought down to the evidence copy's size. Every size is then made from these pixels,
+ * so a 12-megapixel photo is decompressed once rather than once per size.
+ */
+async function decode(input: Uint8Array): Promise<Decoded> {
+  const full = PHOTO_VARIANTS.full.longEdgePx;
+  const { data, info } = await sharp(input, { failOn: 'error', limitInputPixels: MAX_INPUT_PIXELS })
     .rotate()
-    .resize({ width: spec.longEdgePx, height: spec.longEdgePx, fit: 'inside', withoutEnlargement: true });
-  const encoded = spec.format === 'jpeg' ? pipeline.jpeg({ quality: spec.quality, mozjpeg: true }) : pipeline.webp({ quality: spec.quality });
+    .resize({ width: full, height: full, fit: 'inside', withoutEnlargement: true })
+    .toColourspace('srgb')
+    .raw({ depth: 'uchar' })
+    .toBuffer({ resolveWithObject: true });
+  return { pixels: data, width: info.width, height: info.height, channels: info.channels };
+}
+
+async function render(decoded: Decoded, variant: PhotoVariant): Promise<ProcessedVariant> {
+  const spec = PHOTO_VARIANTS[variant];
+  // Raw pixels carry no metadata at all, so nothing from the camera (EXIF, GPS, XMP) can survive.
+  const pipeline = sharp(decoded.pixels, { raw: { width: decoded.width, height: decoded.height, channels: decoded.channels } }).resize({
+    width: spec.longEdgePx,
+    height: spec.longEdgePx,
+    fit: 'inside',
+    withoutEnlargement: true,
+  });
+  const encoded = spec.format === 'jpeg' ? pipeline.jpeg({ quality: spec.quality }) : pipeline.webp({ quality: spec.quality });
   const { data, info } = await encoded.toBuffer({ resolveWithObject: true });
   return {
     bytes: data,
@@ -74,7 +95,8 @@ export async function processPhoto(input: Uint8Array): Promise<ProcessedPhoto> {
   }
   if (!format || !ACCEPTED_FORMATS.has(format)) throw new NotAPhotoError();
   try {
-    const [full, display, thumb] = await Promise.all([render(input, 'full'), render(input, 'display'), render(input, 'thumb')]);
+    const decoded = await decode(input);
+    const [full, display, thumb] = await Promise.all([render(decoded, 'full'), render(decoded, 'display'), render(decoded, 'thumb')]);
     return { full, display, thumb };
   } catch {
     // The header looked like an image but the pixels do not decode: a damaged or disguised file.
