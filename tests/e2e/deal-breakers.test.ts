@@ -61,6 +61,9 @@ describe('a deal-breaker from the survey to the top of the buyer\'s report', () 
     await screenshot(page, 'deal-breaker-01-photo-missing');
 
     await page.goto(`/jobs/${inspectionId}/survey?section=hiddenDamage`);
+    // Wait for the screen to come alive (save state shown) so the file input has its handler.
+    await page.getByRole('heading', { level: 1, name: 'Hidden damage and deal-breakers' }).waitFor();
+    await waitUntilSaved(page);
     await page.getByTestId('photo-file-input').setInputFiles(await photoFile());
     await page.getByTestId('section-photos').getByRole('link').first().waitFor({ timeout: 30_000 });
     await screenshot(page, 'deal-breaker-02-recorded');
