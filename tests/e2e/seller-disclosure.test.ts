@@ -76,6 +76,32 @@ describe('seller’s disclosure beside the findings', () => {
     await page.close();
   });
 
+  it('lets the seller record the moving sheet and a missing chuck', async () => {
+    const page = await sellerBrowser.newPage();
+    await page.goto(`/machines/${machineId}`);
+    await page.getByRole('link', { name: 'Moving sheet' }).click();
+    await page.waitForURL(`**/machines/${machineId}/moving`);
+    await page.getByLabel('Weight (kg)').fill('1850');
+    await page.getByLabel('Site access').selectOption('narrow-door-or-steps');
+    await page.getByRole('button', { name: 'Save moving sheet' }).click();
+    await page.waitForURL(`**/machines/${machineId}`);
+    await page.goto(`/machines/${machineId}/inclusions`);
+    await page.getByText('Nothing listed yet.').waitFor();
+    await page.getByLabel('Description').fill('250 mm 3-jaw chuck');
+    await page.getByLabel('Replacement cost new (€)').fill('600');
+    await page.getByRole('button', { name: 'Add item' }).click();
+    await page.getByRole('button', { name: 'Remove 250 mm 3-jaw chuck' }).waitFor();
+    await page.getByLabel('Description').fill('4-jaw chuck');
+    await page.getByLabel('Condition').selectOption('missing');
+    await page.getByLabel('Replacement cost new (€)').fill('550');
+    await page.getByRole('button', { name: 'Add item' }).click();
+    await page.getByRole('button', { name: 'Remove 4-jaw chuck' }).waitFor();
+    // Good at 60 % of €600 = €360; the missing chuck costs its full €550 (Waygrade rule, common practice).
+    await page.getByText('Worth as they stand: €360 · missing, to replace: €550').waitFor();
+    await screenshot(page, 'inclusions-list');
+    await page.close();
+  });
+
   it('shows the buyer the contradiction beside the claim', async () => {
     const faulty = result.checks.filter((c) => c.band === 'worn' || c.band === 'unfit');
     expect(faulty.length + result.safetyFindings.length).toBeGreaterThan(0);
@@ -110,7 +136,11 @@ describe('seller’s disclosure beside the findings', () => {
     const verdict = page.locator('[data-supply-verdict]');
     await verdict.waitFor();
     expect(await verdict.getAttribute('data-supply-verdict')).toBe('converter-needed');
-    await page.getByLabel('Machine weight (kg)').fill('1850');
+    // The moving sheet's weight and access and the missing chuck arrive filled in.
+    expect(await page.getByLabel('Machine weight (kg)').inputValue()).toBe('1850');
+    expect(await page.getByLabel('Site access').inputValue()).toBe('narrow-door-or-steps');
+    expect(await page.getByRole('row', { name: /Missing tooling/ }).textContent()).toContain('€550');
+    expect(await page.locator('[data-inclusions-value]').textContent()).toContain('€360');
     await page.getByLabel('Distance to your shop (km)').fill('120');
     const total = page.locator('[data-landed-total]');
     await total.waitFor();
