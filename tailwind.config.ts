@@ -11,7 +11,7 @@ const config: Config = {
       },
       colors: {
         paper: { DEFAULT: '#f7f5f0', raised: '#ffffff', sunken: '#eeebe3' },
-        ink: { DEFAULT: '#1f2a30', soft: '#46545c', faint: '#6b777d' },
+        ink: { DEFAULT: '#1f2a30', soft: '#46545c', faint: '#5f6b71' },
         line: { DEFAULT: '#d9d4c8', strong: '#b9b2a3' },
         copper: { DEFAULT: '#a4481f', dark: '#7f3513', light: '#f3e2d8' },
         band: {
