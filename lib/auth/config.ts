@@ -4,6 +4,7 @@ import { eq } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { users } from '@/db/schema';
 import { env } from '@/lib/env';
+import { toAppError } from '@/lib/errors';
 import type { Role } from '@/lib/roles';
 import { authenticate, type SignInRefusal } from './credentials';
 import { clientIpFrom } from './client-ip';
@@ -59,7 +60,15 @@ const config = (): NextAuthConfig => ({
       }
       // Every use of the session re-checks the account: deactivation or a password change ends it.
       if (!token.sub) return null;
-      const current = await findActiveUser(token.sub);
+      let current;
+      try {
+        current = await findActiveUser(token.sub);
+      } catch (error) {
+        // The database is down: keep the signed token as it is rather than signing the person out.
+        // Every operation needs the database too, so it answers "unavailable" (503), not "sign in".
+        if (toAppError(error).code === 'unavailable') return token;
+        throw error;
+      }
       if (!current || current.sessionVersion !== token.sessionVersion) return null;
       token.role = current.role;
       token.name = current.name;
