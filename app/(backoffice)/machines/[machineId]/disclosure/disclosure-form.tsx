@@ -55,10 +55,10 @@ export function DisclosureForm({ machineId, defaults }: { machineId: number; def
           <legend className="text-lg font-semibold">{q.question}</legend>
           <div className="flex flex-wrap gap-4">
             <label className="flex min-h-touch items-center gap-2">
-              <input type="radio" value="no" {...register(q.answer)} /> {q.no}
+              <input type="radio" value="no" {...register(q.answer)} className="h-5 w-5 accent-copper" /> {q.no}
             </label>
             <label className="flex min-h-touch items-center gap-2">
-              <input type="radio" value="yes" {...register(q.answer)} /> Yes
+              <input type="radio" value="yes" {...register(q.answer)} className="h-5 w-5 accent-copper" /> Yes
             </label>
           </div>
           {err(q.answer) ? <p className="text-sm font-medium text-band-rebuild">{err(q.answer)}</p> : null}
@@ -101,7 +101,7 @@ export function DisclosureForm({ machineId, defaults }: { machineId: number; def
         <legend className="text-lg font-semibold">Terms of sale</legend>
         {SALE_TERMS.map((term) => (
           <label key={term} className="flex min-h-touch items-start gap-3">
-            <input type="radio" value={term} {...register('saleTerm')} className="mt-1.5" />
+            <input type="radio" value={term} {...register('saleTerm')} className="mt-1.5 h-5 w-5 accent-copper" />
             <span>
               <span className="font-medium">{SALE_TERM_LABELS[term]}</span>
               <span className="block text-sm text-ink-soft">{SALE_TERM_HINTS[term]}</span>
