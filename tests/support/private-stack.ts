@@ -102,7 +102,7 @@ export class PrivateApp {
   /** kill -9: no shutdown, no flushing, as when the machine loses power. */
   async kill() {
     const child = this.child;
-    if (!child || child.exitCode !== null) return;
+    if (!child || child.exitCode !== null || child.signalCode !== null) return;
     const exited = new Promise((resolve) => child.once('exit', resolve));
     child.kill('SIGKILL');
     await exited;
@@ -111,7 +111,7 @@ export class PrivateApp {
 
   async stop() {
     const child = this.child;
-    if (!child || child.exitCode !== null) return;
+    if (!child || child.exitCode !== null || child.signalCode !== null) return;
     const exited = new Promise((resolve) => child.once('exit', resolve));
     child.kill('SIGTERM');
     const grace = setTimeout(() => child.kill('SIGKILL'), 10_000);
