@@ -62,6 +62,15 @@ const PATH_WORDS: Readonly<Record<string, string>> = {
   voltage: 'voltage',
   phases: 'phases',
   frequencyHz: 'frequency',
+  reason: 'why not',
+  area: 'area',
+  startState: 'machine cold or warm at the start',
+  minutesRunBeforeReadings: 'minutes run before the readings',
+  machineState: 'cold or warm',
+  stations: 'Way thickness',
+  thickness: 'thickness',
+  distanceFromHeadstock: 'distance from the headstock',
+  bindsAtFromHeadstock: 'where the locked carriage binds',
 };
 
 function sectionOfPath(path: readonly PropertyKey[]): SurveySectionId {

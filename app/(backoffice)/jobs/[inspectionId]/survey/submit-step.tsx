@@ -4,6 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState, useTransition } from 'react';
 import type { DraftSurvey } from '@/lib/survey/draft-survey-schema';
 import { submissionBlockers } from '@/lib/survey/submission-blockers';
+import { NotInspectedFields } from './not-inspected-fields';
 import { SURVEY_SECTIONS, sectionById, type SurveySectionId } from '@/lib/survey/survey-sections';
 import { submitSurveyAction } from '../actions';
 import { TextField } from './fields/bound-fields';
@@ -76,6 +77,7 @@ export function SubmitStep({
           </ul>
         )}
       </section>
+      <NotInspectedFields form={form} />
       <section className="rounded-card border border-line bg-paper-raised p-4">
         <TextField form={form} path={['notes']} label="Notes for the coordinator and the report" hint="Anything you could not check, and why" multiline maxLength={5000} />
       </section>
