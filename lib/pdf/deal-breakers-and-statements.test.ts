@@ -44,6 +44,7 @@ function documentFor(surveyFile: string): ReportDocumentData {
 }
 
 describe('deal-breakers and the standing statements in the report PDF', () => {
+  let whole: string;
   let cover: string;
   let guide: string;
   let plainCover: string;
@@ -52,6 +53,7 @@ describe('deal-breakers and the standing statements in the report PDF', () => {
   beforeAll(async () => {
     const pdf = await renderReportPdf(documentFor('lib/scoring/examples/deal-breaker.json'));
     cover = pageText(pdf, 1);
+    whole = pageText(pdf, 1, 99);
     guide = pageText(pdf, 2, 4);
     const plain = await renderReportPdf(documentFor('lib/scoring/examples/near-new.json'));
     plainCover = pageText(plain, 1);
@@ -86,5 +88,12 @@ describe('deal-breakers and the standing statements in the report PDF', () => {
   it('lists the areas not inspected with the inspector\'s reason', () => {
     expect(guide).toContain('Not inspected, as the inspector recorded it');
     expect(guide).toContain('No bar stock on site (demo)');
+  });
+
+  it('draws the way wear beside the level profile with where the carriage binds', () => {
+    // deal-breaker.json: thickest station 25.00 mm, 24.96 mm at 250 mm → 40 µm (arithmetic).
+    expect(whole).toContain('Way wear along the bed');
+    expect(whole).toContain('deepest 40 µm at 250 mm from the headstock');
+    expect(whole).toContain('The locked carriage binds 450 mm from the headstock');
   });
 });

@@ -2,6 +2,7 @@ import { Text, View } from '@react-pdf/renderer';
 import type { CheckResult, SubsystemResult } from '@/lib/scoring';
 import { AlignmentPlot } from './alignment-plot';
 import { BedProfilePlot } from './bed-profile-plot';
+import { WearProfilePlot } from './wear-profile-plot';
 import { CheckTable } from './check-table';
 import { gradeColour } from './condition-scale-mark';
 import { FramedPage, type FrameFacts } from './page-frame';
@@ -48,6 +49,8 @@ export function SubsystemPage({
       </View>
       <CheckTable checks={checks} />
       {subsystem.id === 'bed-and-ways' && profile ? <BedProfilePlot profile={profile} /> : null}
+      {/* Results from before scoring 1.1 have no wear series. */}
+      {subsystem.id === 'bed-and-ways' && data.result.plots.bedWear ? <WearProfilePlot wear={data.result.plots.bedWear} xMaxMm={profile ? Math.max(...profile.points.map((p) => p.x)) : null} /> : null}
       {subsystem.id === 'tailstock' ? <AlignmentPlot checks={checks} /> : null}
     </FramedPage>
   );
