@@ -1,5 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { count, eq } from 'drizzle-orm';
+import Stripe from 'stripe';
 import { closeDatabase, db } from '@/db/client';
 import { paymentEvents } from '@/db/schema';
 import { createAccount } from '../support/accounts';
@@ -44,6 +45,22 @@ describe('the payment webhook endpoint', () => {
     expect(await readOrder(orderId)).toMatchObject({ status: 'pending', paidAt: null });
     expect(await activeGrants(orderId)).toHaveLength(0);
     expect(await queuedMails(buyer.email, 'payment-receipt')).toHaveLength(0);
+  });
+
+  it('refuses a correctly signed completion captured and replayed after the signature’s five minutes', async () => {
+    const { reportId } = await createReleasedReport();
+    const buyer = await createAccount('buyer');
+    const { orderId, sessionId } = await createPendingOrder(reportId, buyer.id);
+    const event = providerEvent('checkout.session.completed', completedSession(sessionId, orderId, 'pi_replayed_late'));
+    const body = JSON.stringify(event);
+    const secret = process.env.STRIPE_WEBHOOK_SECRET ?? 'whsec_waygrade_local';
+    const capturedAnHourAgo = new Stripe('sk_test_unused').webhooks.generateTestHeaderString({ payload: body, secret, timestamp: Math.floor(Date.now() / 1000) - 3600 });
+
+    const replayed = await deliver(body, capturedAnHourAgo);
+    expect(replayed.status).toBe(400);
+    expect(await eventRecorded(event.id)).toBe(0);
+    expect(await readOrder(orderId)).toMatchObject({ status: 'pending', paidAt: null });
+    expect(await activeGrants(orderId)).toHaveLength(0);
   });
 
   it('grants access once when the same completion arrives twice, one after the other and at once', async () => {
