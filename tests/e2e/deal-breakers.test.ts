@@ -68,12 +68,35 @@ describe('a deal-breaker from the survey to the top of the buyer\'s report', () 
     await page.getByTestId('section-photos').getByRole('link').first().waitFor({ timeout: 30_000 });
     await screenshot(page, 'deal-breaker-02-recorded');
 
+    // Bed wear: the carriage-lock distance and two thickness stations draw the wear profile at once.
+    await page.goto(`/jobs/${inspectionId}/survey?section=bedAndWays`);
+    await page.getByRole('heading', { level: 1, name: 'Bed and ways' }).waitFor();
+    await waitUntilSaved(page);
+    await page.getByLabel('Locked carriage binds at, from the headstock').fill('450');
+    await page.getByRole('button', { name: '+ Add a thickness station' }).click();
+    await page.getByRole('button', { name: '+ Add a thickness station' }).click();
+    await page.getByLabel('Way thickness').nth(0).fill('24.96');
+    await page.getByLabel('Way thickness').nth(1).fill('25.00');
+    await page.getByTestId('wear-profile').locator('rect').nth(1).waitFor();
+    await waitUntilSaved(page);
+    await screenshot(page, 'deal-breaker-02b-bed-wear');
+
     await page.goto(`/jobs/${inspectionId}/survey?section=submit`);
     await page.getByTestId('submission-check').getByText('Ready to submit').waitFor();
+    await page.getByRole('button', { name: '+ Add an area not inspected' }).click();
+    await page.getByRole('group', { name: 'Area' }).getByRole('button', { name: /^Test cuts/ }).click();
+    await page.getByLabel('Why not').fill('No bar stock on site for the test cuts');
+    await waitUntilSaved(page);
+    await screenshot(page, 'deal-breaker-02c-submit');
     await page.getByRole('button', { name: 'Submit survey for review' }).click();
     await page.waitForURL(`**/jobs/${inspectionId}?submitted=1`);
     const saved = await savedSurvey(page, String(inspectionId));
     expect(saved.data.data.dealBreakers?.brokenGearTeeth?.present).toBe(true);
+    expect(saved.data.data.bedAndWays?.wayThickness?.stations).toEqual([
+      { distanceFromHeadstock: { value: 0, unit: 'mm' }, thickness: { value: 24.96, unit: 'mm' } },
+      { distanceFromHeadstock: { value: 250, unit: 'mm' }, thickness: { value: 25, unit: 'mm' } },
+    ]);
+    expect(saved.data.data.notInspected).toEqual([{ area: 'testCuts', reason: 'No bar stock on site for the test cuts' }]);
     await page.close();
   }, 240_000);
 
@@ -105,6 +128,7 @@ describe('a deal-breaker from the survey to the top of the buyer\'s report', () 
     expect(order.deal).toBeGreaterThan(-1);
     expect(order.deal).toBeLessThan(order.machine);
     expect(order.machine).toBeLessThan(order.scale);
+    await page.getByText('No bar stock on site for the test cuts').waitFor();
     await page.getByText('Not a warranty').first().waitFor();
     await page.getByText('No advice to buy or not to buy').first().waitFor();
     await screenshot(page, 'deal-breaker-03-buyer-report');
