@@ -56,7 +56,13 @@ export function WearProfilePlot({ series, xMaxMm, title = 'Way wear' }: { series
         {series.carriageBindsAtMm !== null ? (
           <g>
             <line x1={sx(series.carriageBindsAtMm)} x2={sx(series.carriageBindsAtMm)} y1={PAD.top} y2={HEIGHT - PAD.bottom} className="stroke-ink" strokeWidth="1.5" strokeDasharray="4 3" />
-            <text x={sx(series.carriageBindsAtMm) + 4} y={PAD.top + 10} className="fill-ink text-[11px]">
+            {/* Label on the side with room, so it never runs off the plot at the tailstock end. */}
+            <text
+              x={sx(series.carriageBindsAtMm) + (series.carriageBindsAtMm > xMax / 2 ? -4 : 4)}
+              y={PAD.top + 10}
+              textAnchor={series.carriageBindsAtMm > xMax / 2 ? 'end' : 'start'}
+              className="fill-ink text-[11px]"
+            >
               carriage binds
             </text>
           </g>

@@ -49,7 +49,7 @@ export function BedWearFields({ form }: { form: SurveyForm }) {
               form.set(at('wayThickness', 'stations', index), undefined);
               setRemovals((n) => n + 1);
             }}
-            className="min-h-touch self-start rounded-lg px-3 font-medium text-ink-soft hover:bg-paper-sunken"
+            className="col-span-2 min-h-touch self-start justify-self-start rounded-lg px-3 font-medium text-ink-soft hover:bg-paper-sunken"
           >
             Remove station {index + 1}
           </button>
