@@ -15,7 +15,7 @@ export default async function ComparePage() {
   return (
     <>
       <p className="text-sm font-semibold uppercase tracking-widest text-copper">Compare</p>
-      <h1 className="mt-1 text-3xl font-semibold">Inspected machines side by side</h1>
+      <h1 className="mt-1 text-3xl font-semibold">Compare inspected machines</h1>
       <p className="mt-2 max-w-3xl text-ink-soft">
         Every lathe with a released Waygrade report, on one scale: sizes, the overall condition and each subsystem’s grade, how much of the
         survey was measured, and the asking price against the estimated value.
