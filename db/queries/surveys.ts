@@ -1,7 +1,6 @@
 import 'server-only';
 import { and, eq, isNull, sql } from 'drizzle-orm';
-import { inspections, inspectionStatusEvents, machines, surveys, users } from '@/db/schema';
-import type { InspectionStatus } from '@/db/schema/inspections';
+import { inspections, machines, surveys, users } from '@/db/schema';
 import type { Database } from '@/db/client';
 
 type Reader = Pick<Database, 'select'>;
@@ -78,21 +77,6 @@ export async function updateSurveyIfCurrent(writer: Writer, input: { inspectionI
 
 export async function markSurveySubmitted(writer: Writer, inspectionId: number, at: Date) {
   await writer.update(surveys).set({ submittedAt: at }).where(eq(surveys.inspectionId, inspectionId));
-}
-
-/** Moves an inspection on and records the step on its timeline. */
-export async function moveInspectionStatus(
-  writer: Writer,
-  input: { inspectionId: number; from: InspectionStatus; to: InspectionStatus; actorId: string; note?: string },
-) {
-  await writer.update(inspections).set({ status: input.to }).where(eq(inspections.id, input.inspectionId));
-  await writer.insert(inspectionStatusEvents).values({
-    inspectionId: input.inspectionId,
-    fromStatus: input.from,
-    toStatus: input.to,
-    actorId: input.actorId,
-    note: input.note ?? null,
-  });
 }
 
 /** Active coordinators, who are told when a survey is waiting for review. */

@@ -1,5 +1,6 @@
 import 'server-only';
-import { findInspectionWithMachine, findSurvey, insertSurvey, moveInspectionStatus } from '@/db/queries/surveys';
+import { findInspectionWithMachine, findSurvey, insertSurvey } from '@/db/queries/surveys';
+import { moveInspection } from '@/lib/workflow/status-events';
 import { defineOperation } from '@/lib/auth/operation';
 import { AppError } from '@/lib/errors';
 import { INSPECTION_STATUS_LABELS } from '@/lib/inspection-status';
@@ -22,7 +23,7 @@ export const startVisit = defineOperation({
     if (!mayTransition(actor!.role, inspection.status, 'on_site')) {
       throw new AppError('conflict', `This inspection is “${INSPECTION_STATUS_LABELS[inspection.status]}”; the visit cannot be started now.`);
     }
-    await moveInspectionStatus(tx, { inspectionId: inspection.id, from: inspection.status, to: 'on_site', actorId: actor!.id });
+    await moveInspection(tx, { inspectionId: inspection.id, from: inspection.status, to: 'on_site', actorId: actor!.id });
     if (!(await findSurvey(tx, inspection.id))) {
       const today = new Date().toISOString().slice(0, 10);
       await insertSurvey(tx, { inspectionId: inspection.id, formatVersion: SURVEY_FORMAT_VERSION, data: startingSurvey(inspection, today), userId: actor!.id });

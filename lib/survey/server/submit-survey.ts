@@ -2,7 +2,8 @@ import 'server-only';
 import { insertDraftReport } from '@/db/queries/report-writes';
 import { loadScoreOptions } from '@/db/queries/scoring-inputs';
 import { countSurveyPhotos, countSurveyPhotosBySection } from '@/db/queries/survey-photos';
-import { findInspectionWithMachine, findSurvey, listActiveCoordinators, markSurveySubmitted, moveInspectionStatus } from '@/db/queries/surveys';
+import { findInspectionWithMachine, findSurvey, listActiveCoordinators, markSurveySubmitted } from '@/db/queries/surveys';
+import { moveInspection } from '@/lib/workflow/status-events';
 import { defineOperation } from '@/lib/auth/operation';
 import { AppError } from '@/lib/errors';
 import { INSPECTION_STATUS_LABELS } from '@/lib/inspection-status';
@@ -69,7 +70,7 @@ export const submitSurvey = defineOperation({
     });
     const submittedAt = new Date();
     await markSurveySubmitted(tx, inspection.id, submittedAt);
-    await moveInspectionStatus(tx, { inspectionId: inspection.id, from: inspection.status, to: 'in_review', actorId: actor!.id, note: 'Survey submitted' });
+    await moveInspection(tx, { inspectionId: inspection.id, from: inspection.status, to: 'in_review', actorId: actor!.id, note: 'Survey submitted' });
     // Queued in this transaction: the coordinators hear of it only if the submission commits.
     const findingsOutOfTolerance = result.checks.filter((check) => check.q !== null && check.q > 1).length;
     for (const coordinator of await listActiveCoordinators(tx)) {
