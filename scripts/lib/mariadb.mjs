@@ -161,6 +161,19 @@ export async function startMariaDb(projectRoot, databases, log = console.log) {
   return { paths, startedHere };
 }
 
+/** How many connections the app's database user holds now: other checkouts' test runs, a running app, a benchmark. */
+export function appConnectionCount(projectRoot) {
+  const paths = mariaDbPaths(projectRoot);
+  if (!readPid(paths)) return 0;
+  const client = findProgram('mariadb') ?? 'mariadb';
+  const result = spawnSync(
+    client,
+    ['--no-defaults', `--socket=${paths.socket}`, '-uroot', '-N', '-B', '-e', `SELECT COUNT(*) FROM information_schema.PROCESSLIST WHERE USER = '${DB_USER}'`],
+    { encoding: 'utf8' },
+  );
+  return result.status === 0 ? Number(result.stdout.trim()) || 0 : 0;
+}
+
 /** Asks the server to shut down and waits until the process has gone. */
 export async function stopMariaDb(projectRoot, log = console.log) {
   const paths = mariaDbPaths(projectRoot);

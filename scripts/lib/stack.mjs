@@ -5,7 +5,7 @@ import { randomBytes } from 'node:crypto';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ProcessGroup, portIsOpen, run, waitForPort } from './processes.mjs';
-import { databaseUrl, startMariaDb, stopMariaDb } from './mariadb.mjs';
+import { appConnectionCount, databaseUrl, startMariaDb, stopMariaDb } from './mariadb.mjs';
 import { findProgram } from './debian-package.mjs';
 
 export const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -65,7 +65,13 @@ export async function bringUp(mode, { resetDatabase = false } = {}) {
 
   const stop = async () => {
     await group.stopAll();
-    if (stopDatabase) await stopMariaDb(root);
+    // A server this run started is stopped again, unless other programs (another run with its own
+    // WAYGRADE_PORT_OFFSET, a benchmark) have connected to it meanwhile: they would lose their database.
+    if (stopDatabase) {
+      const others = appConnectionCount(root);
+      if (others === 0) await stopMariaDb(root);
+      else console.log(`MariaDB left running: ${others} connection(s) from other programs`);
+    }
   };
 
   try {
