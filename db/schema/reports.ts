@@ -51,6 +51,13 @@ export const reports = mysqlTable(
     releasedAt: timestamp('released_at'),
     withdrawnAt: timestamp('withdrawn_at'),
     supersededById: int('superseded_by_id'),
+    /**
+     * What the report sets beside the findings, copied at release so the released version never
+     * changes when the listing does: the seller's disclosure, the landed-cost basis and the
+     * machine's thermal state per section (ReleaseFacts in lib/pdf/release-facts.ts). Null on
+     * drafts and on versions released before the copy was kept.
+     */
+    releaseFacts: json('release_facts'),
     createdAt: createdAt(),
   },
   (t) => [

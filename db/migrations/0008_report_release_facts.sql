@@ -1,0 +1,1 @@
+ALTER TABLE `reports` ADD `release_facts` json;
