@@ -16,3 +16,4 @@ export * from './machine-inclusions';
 export * from './machine-price-changes';
 export * from './buyer-shop-profiles';
 export * from './report-settings';
+export * from './reinspection-requests';

@@ -20,8 +20,13 @@ export const inspectionFees = mysqlTable(
 );
 
 export const ORDER_STATUSES = ['pending', 'paid', 'refunded', 'expired'] as const;
+/** What an order pays for: a released report, or a new visit to a machine whose report is stale. */
+export const ORDER_PURPOSES = ['report', 'reinspection'] as const;
 
-/** A buyer's purchase of a report, tied to the payment provider's ids. */
+/**
+ * A buyer's payment, tied to the payment provider's ids: for a report, or for a re-inspection (then
+ * report_id is the released report the request was made from, and reinspection_requests holds the rest).
+ */
 export const orders = mysqlTable(
   'orders',
   {
@@ -32,6 +37,7 @@ export const orders = mysqlTable(
     buyerId: userId('buyer_id')
       .notNull()
       .references(() => users.id),
+    purpose: mysqlEnum('purpose', ORDER_PURPOSES).notNull().default('report'),
     amountMinor: minorUnits('amount_minor').notNull(),
     currency: currency(),
     status: mysqlEnum('status', ORDER_STATUSES).notNull().default('pending'),
