@@ -13,6 +13,18 @@ export const machineStateSchema = z
   .enum(['cold', 'warm'])
   .describe('Machine cold (not run before the reading) or warm (run long enough for the housings to warm)');
 
+/**
+ * The machine's thermal state while a section's readings were taken (format v1.1, optional):
+ * when they were taken, and the inspector's own cold/warm where it overrides the state the app
+ * derives from the power-run log. Recorded beside the readings; the scorer does not use it.
+ */
+export const sectionThermalSchema = z
+  .object({
+    readingsAt: z.iso.datetime().describe('When the last reading of the section was taken (UTC)').optional(),
+    machineState: machineStateSchema.describe('Set by the inspector; overrides the state derived from the power-run log').optional(),
+  })
+  .strict();
+
 const powerRunRangeSchema = z
   .object({
     range: z.string().min(1).max(60).describe('Speed range as marked on the machine'),
@@ -26,6 +38,7 @@ export const powerRunSchema = z
   .object({
     startState: machineStateSchema.describe('State of the machine when it was first started on the day'),
     minutesRunBeforeReadings: z.number().min(0).max(600).describe('Minutes the spindle ran before the readings were taken'),
+    startedAt: z.iso.datetime().describe('When the spindle was first started on the day (UTC)').optional(),
     ranges: z.array(powerRunRangeSchema).max(24).optional(),
   })
   .strict();

@@ -32,6 +32,7 @@ import {
   notInspectedSchema,
   powerRunSchema,
   safetyGateSchema,
+  sectionThermalSchema,
   wayThicknessSchema,
 } from './condition-findings';
 
@@ -137,6 +138,7 @@ const gearboxSchema = z
     threadRangesEngage: deviceStateSchema.describe('Every thread range engages and drives').optional(),
     halfNut: wear.optional(),
     feedClutch: wear.optional(),
+    thermal: sectionThermalSchema.optional(),
   })
   .strict();
 
@@ -157,6 +159,7 @@ const driveSchema = z
     belt: beltSchema.optional(),
     beltCondition: wear.describe('Belt condition when the drive geometry was not measured').optional(),
     motorNoise: noise.optional(),
+    thermal: sectionThermalSchema.optional(),
   })
   .strict();
 
@@ -196,6 +199,7 @@ const bedSchema = z
     carriageWear: wear.describe('Carriage fit: gibs at end of adjustment, tight toward the tailstock').optional(),
     carriageLockTest: carriageLockTestSchema.optional(),
     wayThickness: wayThicknessSchema.optional(),
+    thermal: sectionThermalSchema.optional(),
   })
   .strict();
 
@@ -229,6 +233,7 @@ const spindleSchema = z
     temperatureRise: temperatureRiseSchema.describe('Bearing housing rise after 30 min at mid speed').optional(),
     vibration: vibrationVelocitySchema.optional(),
     machineState: machineStateSchema.optional(),
+    thermal: sectionThermalSchema.optional(),
   })
   .strict();
 
@@ -253,6 +258,7 @@ const slidesSchema = z
     leadscrewEndPlay: lengthSchema.optional(),
     slideWear: wear.describe('Cross and top slide dovetails and gibs').optional(),
     dials: wear.optional(),
+    thermal: sectionThermalSchema.optional(),
   })
   .strict();
 
@@ -275,6 +281,7 @@ const tailstockSchema = z
     quillCondition: wear.optional(),
     quillLock: deviceStateSchema.optional(),
     machineState: machineStateSchema.optional(),
+    thermal: sectionThermalSchema.optional(),
   })
   .strict();
 
@@ -302,6 +309,7 @@ const testCutsSchema = z
       .strict()
       .optional(),
     machineState: machineStateSchema.optional(),
+    thermal: sectionThermalSchema.optional(),
   })
   .strict();
 
