@@ -1,4 +1,4 @@
-import { decimal, index, int, mysqlEnum, mysqlTable, smallint, varchar } from 'drizzle-orm/mysql-core';
+import { date, decimal, index, int, mysqlEnum, mysqlTable, smallint, varchar } from 'drizzle-orm/mysql-core';
 import { minorUnits, timestamp } from './columns';
 import { LATHE_KINDS } from './machines';
 import { CONDITION_GRADES } from './reports';
@@ -53,6 +53,25 @@ export const comparisonEntries = mysqlTable(
     electricalGrade: subsystemGrade('electrical'),
     accessoriesScore: subsystemScore('accessories'),
     accessoriesGrade: subsystemGrade('accessories'),
+    // Decision figures that do not depend on who reads the table, kept by the same triggers from the
+    // report, its survey, the listing, its moving sheet and its inclusions (see the migration).
+    /** Deal-breakers in the scoring result: how many, and their ids in the result's order, comma-separated. */
+    dealBreakerCount: smallint('deal_breaker_count').notNull().default(0),
+    dealBreakers: varchar('deal_breakers', { length: 255 }).notNull().default(''),
+    /** Inclusions in the listing's currency at their condition's share of replacement cost; NULL when none are listed. */
+    inclusionsValueMinor: minorUnits('inclusions_value_minor'),
+    /** Replacement cost of the inclusions listed as missing; NULL when none are listed (nothing known to be missing). */
+    missingToolingMinor: minorUnits('missing_tooling_minor'),
+    /** Rigging from the moving sheet's weight and access at the table's stated distance and demo rates; NULL without a moving sheet. */
+    riggingMinor: minorUnits('rigging_minor'),
+    /** Asking price + rigging + missing tooling + repairs, each where known: the landed cost before the reader's converter. */
+    landedBaseMinor: minorUnits('landed_base_minor').notNull().default(0),
+    /** Nameplate supply recorded in the survey and the motor power, for the converter the reader's shop needs. */
+    supplyVoltage: smallint('supply_voltage'),
+    supplyPhases: smallint('supply_phases'),
+    motorKw: decimal('motor_kw', { precision: 5, scale: 2 }),
+    listedAt: timestamp('listed_at').notNull(),
+    inspectedOn: date('inspected_on', { mode: 'string' }).notNull(),
   },
   (t) => [
     // Sorting by these reads the index in order and stops at the page (measured with scripts/bench-table.ts).
@@ -66,5 +85,12 @@ export const comparisonEntries = mysqlTable(
     index('comparison_entries_centres_idx').on(t.betweenCentresMm),
     index('comparison_entries_machine_idx').on(t.machineId),
     index('comparison_entries_inspection_idx').on(t.inspectionId),
+    // The decision columns: days listed and report age sort and filter by these dates; deal-breakers
+    // by count ("none" is count = 0); landed cost and inclusions value for readers who see them all.
+    index('comparison_entries_listed_idx').on(t.listedAt),
+    index('comparison_entries_inspected_idx').on(t.inspectedOn),
+    index('comparison_entries_deal_breakers_idx').on(t.dealBreakerCount),
+    index('comparison_entries_landed_idx').on(t.landedBaseMinor),
+    index('comparison_entries_inclusions_idx').on(t.inclusionsValueMinor),
   ],
 );
