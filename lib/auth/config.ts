@@ -1,13 +1,11 @@
 import NextAuth, { CredentialsSignin, type NextAuthConfig } from 'next-auth';
 import Credentials from 'next-auth/providers/credentials';
-import { eq } from 'drizzle-orm';
-import { db } from '@/db/client';
-import { users } from '@/db/schema';
 import { env } from '@/lib/env';
 import { toAppError } from '@/lib/errors';
 import type { Role } from '@/lib/roles';
 import { authenticate, type SignInRefusal } from './credentials';
 import { clientIpFrom } from './client-ip';
+import { findActiveAccount, usesSecureCookies } from './read-session';
 
 /** Carries why sign-in was refused to the sign-in action, which words it for the person. */
 class SignInRefused extends CredentialsSignin {
@@ -17,20 +15,10 @@ class SignInRefused extends CredentialsSignin {
   }
 }
 
-async function findActiveUser(id: string) {
-  const [row] = await db
-    .select({ id: users.id, role: users.role, sessionVersion: users.sessionVersion, deactivatedAt: users.deactivatedAt, name: users.name, email: users.email })
-    .from(users)
-    .where(eq(users.id, id))
-    .limit(1);
-  return row && !row.deactivatedAt ? row : null;
-}
-
 const config = (): NextAuthConfig => ({
   secret: env().AUTH_SECRET,
   trustHost: true,
-  // __Secure- cookies need HTTPS; a local http:// address keeps plain names so it still works.
-  useSecureCookies: env().NODE_ENV === 'production' && env().APP_URL.startsWith('https:'),
+  useSecureCookies: usesSecureCookies(),
   session: { strategy: 'jwt', maxAge: 60 * 60 * 12 },
   pages: { signIn: '/sign-in' },
   logger: {
@@ -62,7 +50,7 @@ const config = (): NextAuthConfig => ({
       if (!token.sub) return null;
       let current;
       try {
-        current = await findActiveUser(token.sub);
+        current = await findActiveAccount(token.sub);
       } catch (error) {
         // The database is down: keep the signed token as it is rather than signing the person out.
         // Every operation needs the database too, so it answers "unavailable" (503), not "sign in".

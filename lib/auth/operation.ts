@@ -28,6 +28,13 @@ export type OperationDefinition<S extends z.ZodType, T> = {
   run: (ctx: Context<z.output<S>> & { tx: Transaction }) => Promise<{ data: T; entityId?: string | number | null; detail?: Record<string, unknown> }>;
   /** Reads need no audit row when they succeed; denials are always recorded. */
   auditSuccess?: boolean;
+  /**
+   * A read that needs neither a transaction nor an audit row on success (table pages, exports):
+   * it runs on the database itself, which saves the BEGIN/COMMIT round trips and, with read
+   * replicas configured, sends its statements to a replica. Anything read back right after a
+   * write of the same request or device must not be marked so: a replica can lag.
+   */
+  readOnly?: boolean;
 };
 
 export type Operation<S extends z.ZodType, T> = {
@@ -82,6 +89,11 @@ export function defineOperation<S extends z.ZodType, T>(definition: OperationDef
           await auditRefusal(actor, name, entityType, 'denied', ip);
           // Not found rather than forbidden: do not confirm that someone else's record exists.
           return failure(new AppError('not_found'));
+        }
+        if (definition.readOnly) {
+          // Drizzle's transaction type is the database's plus rollback, which a read never calls.
+          const outcome = await definition.run({ actor, input, ip, tx: db as unknown as Transaction });
+          return { ok: true, data: outcome.data };
         }
         const data = await db.transaction(async (tx) => {
           const outcome = await definition.run({ actor, input, ip, tx });

@@ -12,6 +12,7 @@ export const exportComparison = defineOperation({
   access: 'compare.use',
   input: comparisonQuerySchema,
   auditSuccess: false,
+  readOnly: true,
   async run({ actor, input, tx }) {
     const visibility = await loadDetailVisibility(tx, actor!);
     const rows = await listComparisonRowsForExport(tx, input, visibility, actor!.id);

@@ -10,6 +10,7 @@ export const listComparisonPage = defineOperation({
   access: 'compare.use',
   input: comparisonQuerySchema,
   auditSuccess: false,
+  readOnly: true,
   async run({ actor, input, tx }) {
     const visibility = await loadDetailVisibility(tx, actor!);
     return { data: await listComparisonRows(tx, input, visibility, actor!.id) };

@@ -1,7 +1,7 @@
 import 'server-only';
 import { createUploadthing, type FileRouter } from 'uploadthing/next';
 import { UploadThingError } from 'uploadthing/server';
-import { auth } from '@/lib/auth/config';
+import { currentActor } from '@/lib/auth/current-actor';
 import type { Actor } from '@/lib/auth/operation';
 import type { Role } from '@/lib/roles';
 import { ingestSurveyPhoto } from '@/lib/photos/ingest-survey-photo';
@@ -26,9 +26,7 @@ export const surveyPhotoRouter = {
   surveyPhoto: upload({ image: { maxFileSize: '16MB', maxFileCount: 1 } })
     .input(surveyPhotoTargetSchema)
     .middleware(async ({ input }) => {
-      const session = await auth();
-      const user = session?.user;
-      const actor: Actor | null = user?.id ? { id: user.id, role: user.role, name: user.name, email: user.email } : null;
+      const actor = await currentActor();
       const allowed = await authorizeSurveyPhoto.execute(actor, input);
       if (!allowed.ok) throw new UploadThingError({ code: allowed.code === 'unauthenticated' ? 'FORBIDDEN' : 'BAD_REQUEST', message: allowed.message });
       return { inspectionId: allowed.data.inspectionId, section: allowed.data.section, actorId: actor!.id, actorRole: actor!.role as string };
