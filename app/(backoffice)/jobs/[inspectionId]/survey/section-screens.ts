@@ -14,20 +14,21 @@ import { SlidesSection } from './sections/slides-section';
 import { SpindleSection } from './sections/spindle-section';
 import { TailstockSection } from './sections/tailstock-section';
 import { TestCutsSection } from './sections/test-cuts-section';
+import { withThermalState } from './with-thermal-state';
 
-/** The screen for each survey section. */
+/** The screen for each survey section; measured sections carry their cold/warm control. */
 export const SECTION_SCREENS: Readonly<Record<SurveySectionId, ComponentType<{ form: SurveyForm }>>> = {
   identity: IdentitySection,
   hiddenDamage: HiddenDamageSection,
   lubrication: LubricationSection,
   powerRun: PowerRunSection,
-  gearboxAndFeeds: GearboxSection,
-  drive: DriveSection,
-  bedAndWays: BedSection,
-  spindle: SpindleSection,
-  slidesAndScrews: SlidesSection,
-  tailstock: TailstockSection,
-  testCuts: TestCutsSection,
+  gearboxAndFeeds: withThermalState(GearboxSection, 'gearboxAndFeeds'),
+  drive: withThermalState(DriveSection, 'drive'),
+  bedAndWays: withThermalState(BedSection, 'bedAndWays'),
+  spindle: withThermalState(SpindleSection, 'spindle'),
+  slidesAndScrews: withThermalState(SlidesSection, 'slidesAndScrews'),
+  tailstock: withThermalState(TailstockSection, 'tailstock'),
+  testCuts: withThermalState(TestCutsSection, 'testCuts'),
   electricalAndSafety: ElectricalSection,
   accessories: AccessoriesSection,
 };

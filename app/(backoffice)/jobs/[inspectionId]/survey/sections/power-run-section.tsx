@@ -14,6 +14,36 @@ const STATE_CHOICES = [
 ] as const;
 
 /**
+ * When the spindle was first started: with the time each section's readings were taken, it tells
+ * every measured section whether the machine was still cold or had warmed.
+ */
+function SpindleStartClock({ form }: { form: SurveyForm }) {
+  const startedAt = form.get(at('startedAt')) as string | undefined;
+  return (
+    <div className="flex flex-col gap-2">
+      <p className="font-medium">Spindle first started</p>
+      <p className="figures text-ink-soft" data-spindle-started={startedAt ?? ''}>
+        {startedAt ? `${new Date(startedAt).toISOString().slice(11, 16)} UTC` : 'Not marked yet: tap when you start the spindle.'}
+      </p>
+      <div className="flex flex-wrap gap-2">
+        <button
+          type="button"
+          onClick={() => form.set(at('startedAt'), new Date().toISOString())}
+          className="min-h-touch rounded-lg border border-line-strong bg-paper-raised px-4 font-medium hover:bg-paper-sunken"
+        >
+          {startedAt ? 'Mark the start again: now' : 'Spindle started: now'}
+        </button>
+        {startedAt ? (
+          <button type="button" onClick={() => form.set(at('startedAt'), undefined)} className="min-h-touch rounded-lg px-3 font-medium text-ink-soft hover:bg-paper-sunken">
+            Clear the start time
+          </button>
+        ) : null}
+      </div>
+    </div>
+  );
+}
+
+/**
  * The power-run log: how warm the machine was at the start, how long it ran before the readings,
  * and noise and housing temperature in each speed range, each marked cold or warm, because
  * run-out, noise and play all change as a headstock warms.
@@ -26,6 +56,7 @@ export function PowerRunSection({ form }: { form: SurveyForm }) {
       <FieldGroup title="Start">
         <ChoiceField form={form} path={at('startState')} label="Machine at the start" choices={STATE_CHOICES} />
         <PlainNumberField form={form} path={at('minutesRunBeforeReadings')} label="Minutes run before the readings" unit="min" bounds={{ min: 0, max: 600 }} />
+        <SpindleStartClock form={form} />
       </FieldGroup>
       <FieldGroup title="Each speed range" hint="Run each range for a minute; rate the noise by ear; read the headstock housing with a contact or infrared thermometer.">
         {ranges.map((_, index) => (
