@@ -4,6 +4,7 @@ import { reportAccessGrants, reports, reportSubsystemScores } from '@/db/schema'
 import type { Database } from '@/db/client';
 import type { ScoringResult } from '@/lib/scoring';
 import { newVerificationCode } from '@/lib/verification-code';
+import { collectReleaseFacts } from './release-facts';
 
 type Writer = Pick<Database, 'insert' | 'select' | 'update'>;
 
@@ -67,7 +68,10 @@ export async function releaseDraftReport(tx: Writer, input: { reportId: number; 
   const at = input.at ?? new Date();
   const [draft] = await tx.select().from(reports).where(and(eq(reports.id, input.reportId), eq(reports.status, 'draft')));
   if (!draft) return null;
-  await tx.update(reports).set({ status: 'released', releasedAt: at, reviewerId: input.reviewerId }).where(eq(reports.id, draft.id));
+  // The facts set beside the findings are copied with the release: the trigger keeps them as they are.
+  const result = (typeof draft.result === 'string' ? JSON.parse(draft.result) : draft.result) as ScoringResult;
+  const releaseFacts = await collectReleaseFacts(tx, { machineId: draft.machineId, inspectionId: draft.inspectionId, motorPowerKw: result.machine.motorPowerKw });
+  await tx.update(reports).set({ status: 'released', releasedAt: at, reviewerId: input.reviewerId, releaseFacts }).where(eq(reports.id, draft.id));
   await tx
     .update(reports)
     .set({ supersededById: draft.id })
