@@ -54,7 +54,7 @@ export const reports = mysqlTable(
     /**
      * What the report sets beside the findings, copied at release so the released version never
      * changes when the listing does: the seller's disclosure, the landed-cost basis and the
-     * machine's thermal state per section (ReleaseFacts in lib/pdf/release-facts.ts). Null on
+     * machine's thermal state per section (ReleaseFacts in lib/decision/release-facts.ts). Null on
      * drafts and on versions released before the copy was kept.
      */
     releaseFacts: json('release_facts'),
