@@ -3,6 +3,7 @@ import { asc, eq } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { inspections, machineInclusions, machinePriceChanges, machineMovingSheets, machines, reports, surveys } from '@/db/schema';
 import type { SupplySpec } from '@/lib/decision/phase-converter';
+import { parseReleaseFacts } from '@/lib/decision/release-facts';
 import { findReportValidityDays } from './report-settings';
 import type { ScoringResult } from '@/lib/scoring';
 
@@ -22,6 +23,7 @@ export async function findReportDecisionFacts(reportId: number) {
     .select({
       machineId: reports.machineId,
       result: reports.result,
+      releaseFacts: reports.releaseFacts,
       releasedAt: reports.releasedAt,
       repairEstimateMinor: reports.repairEstimateMinor,
       reportCurrency: reports.currency,
@@ -56,6 +58,8 @@ export async function findReportDecisionFacts(reportId: number) {
     machineId: row.machineId,
     result,
     nameplate: nameplateSupply(surveyData),
+    /** The disclosure, landed-cost basis and thermal states as kept at release; null on drafts and older versions. */
+    releaseFacts: parseReleaseFacts(row.releaseFacts),
     askingPriceMinor: row.askingPriceMinor,
     currency: row.machineCurrency,
     motorKw: row.motorKw === null ? null : Number(row.motorKw),

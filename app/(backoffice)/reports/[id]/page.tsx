@@ -4,7 +4,6 @@ import { Card } from '@/components/ui/card';
 import { ConditionBadge } from '@/components/ui/condition-badge';
 import { findCatalogueReport } from '@/db/queries/reports-catalogue';
 import { findReportFindings } from '@/db/queries/report-findings';
-import { findMachineDisclosure } from '@/db/queries/machine-disclosures';
 import { findReportDecisionFacts } from '@/db/queries/report-decision';
 import { assessDisclosure } from '@/lib/decision/disclosure-contradictions';
 import { daysOnMarket, reportCurrency } from '@/lib/decision/report-currency';
@@ -21,6 +20,7 @@ import { CurrencyBanner } from './currency-banner';
 import { DisclosurePanel } from './disclosure-panel';
 import { InclusionsPanel } from './inclusions-panel';
 import { LandedCostPanel } from './landed-cost-panel';
+import { ThermalStatesPanel } from './thermal-states-panel';
 
 export const metadata: Metadata = { title: 'Report summary' };
 
@@ -55,7 +55,9 @@ export default async function ReportSummaryPage({
   const showsFindings = canDownload || owner;
   const findings = await findReportFindings(report.id);
   const facts = await findReportDecisionFacts(report.id);
-  const disclosure = facts && showsFindings ? await findMachineDisclosure(facts.machineId) : null;
+  // The seller's answers as kept with this version at release, not as the listing reads today.
+  const kept = facts && showsFindings ? facts.releaseFacts : null;
+  const disclosure = kept?.disclosure ?? null;
   const shopSupply = facts && showsFindings ? await findShopSupply(user.id) : null;
   const currency = facts ? reportCurrency(facts.inspectedOn ?? report.releasedAt ?? new Date(), new Date(), facts.validityDays) : null;
 
@@ -161,7 +163,11 @@ export default async function ReportSummaryPage({
         </section>
       </div>
       {facts && showsFindings ? (
-        <DisclosurePanel assessments={disclosure ? assessDisclosure(disclosure, facts.result, facts.nameplate) : null} answeredOn={disclosure?.updatedAt ?? null} />
+        <DisclosurePanel
+          assessments={disclosure ? assessDisclosure(disclosure, facts.result, facts.nameplate) : null}
+          answeredOn={disclosure ? new Date(disclosure.answeredAt) : null}
+          keptWithVersion={kept !== null}
+        />
       ) : null}
       {facts && showsFindings ? <InclusionsPanel items={facts.inclusions} currency={facts.currency} /> : null}
       {facts && showsFindings ? (
@@ -180,6 +186,7 @@ export default async function ReportSummaryPage({
           }}
         />
       ) : null}
+      {kept ? <ThermalStatesPanel states={kept.thermalStates} /> : null}
       <ReportStatements notInspected={showsFindings ? (findings?.notInspected ?? null) : null} />
     </>
   );
