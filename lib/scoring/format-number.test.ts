@@ -24,4 +24,32 @@ describe('number rounding for reports', () => {
       }),
     );
   });
+
+  // Reference: ECMAScript Number::toString (String(x)), the text fmt replaced — same characters
+  // for every number and every number of decimals, including exponent form and the halves.
+  it('writes exactly what String(roundTo(n, digits)) writes', () => {
+    const same = (n: number, d: number) => {
+      expect(fmt(n, d)).toBe(String(roundTo(n, d)));
+    };
+    fc.assert(
+      fc.property(fc.double(), fc.integer({ min: 0, max: 12 }), (n, d) => {
+        same(n, d);
+      }),
+      { numRuns: 5000 },
+    );
+    fc.assert(
+      fc.property(fc.integer({ min: -2_000_000, max: 2_000_000 }), fc.integer({ min: 0, max: 9 }), (k, d) => {
+        // Decimals ending in 5 one place beyond the rounding: where rounding half up shows.
+        same((k * 10 + 5) / 10 ** (d + 1), d);
+        same(k / 10 ** d, d);
+      }),
+      { numRuns: 5000 },
+    );
+    for (const [n, d] of [
+      [0.0000005, 6], [0.000001, 6], [1e-7, 9], [123456789.123456, 6], [-2.5, 0], [-0.00025, 4], [1e21, 2], [Number.NaN, 2], [-Infinity, 1],
+    ] as const) same(n, d);
+    expect(fmt(0.0125, 3)).toBe('0.013');
+    expect(fmt(-12.5, 0)).toBe('-12');
+    expect(fmt(1.0000001, 4)).toBe('1');
+  });
 });

@@ -35,13 +35,11 @@ export function plotSeries(
         points: twist.transverseMmPerM.map((v, i) => ({ x: round((ctx.bed.stationSpacingMm ?? 0) * i, 1), y: round(v, 5) })),
       }
     : null;
-  return {
-    bedProfile,
-    bedTwist,
-    bedWear,
-    checkRatios: checks
-      .filter((c) => c.status === 'measured' && c.q !== null && c.band !== null)
-      .map((c) => ({ checkId: c.id, label: c.label, q: c.q!, band: c.band! })),
-    subsystemScores: subsystems.filter((s) => s.score !== null).map((s) => ({ subsystem: s.id, label: s.label, score: s.score! })),
-  };
+  const checkRatios: PlotSeries['checkRatios'] = [];
+  for (const c of checks) {
+    if (c.status === 'measured' && c.q !== null && c.band !== null) checkRatios.push({ checkId: c.id, label: c.label, q: c.q, band: c.band });
+  }
+  const subsystemScores: PlotSeries['subsystemScores'] = [];
+  for (const s of subsystems) if (s.score !== null) subsystemScores.push({ subsystem: s.id, label: s.label, score: s.score });
+  return { bedProfile, bedTwist, bedWear, checkRatios, subsystemScores };
 }

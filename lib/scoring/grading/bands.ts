@@ -25,9 +25,27 @@ export const BAND_TABLE: readonly BandDefinition[] = [
 ];
 
 export function bandFor(q: number): BandDefinition {
-  return BAND_TABLE.find((b) => q <= b.upToQ) ?? BAND_TABLE[BAND_TABLE.length - 1]!;
+  // A plain loop: this runs for every check of every survey. NaN matches no edge and lands in the last band.
+  for (const b of BAND_TABLE) if (q <= b.upToQ) return b;
+  return BAND_TABLE[BAND_TABLE.length - 1]!;
 }
 
+/** Each band's label in lower case for running text, made once rather than for every sentence. */
+const LOWER_CASE_LABELS: ReadonlyMap<BandDefinition, string> = new Map(BAND_TABLE.map((b) => [b, b.label.toLowerCase()]));
+
+/** A band's label in lower case ("in limit"), as the summaries use it. */
+export function bandWords(band: BandDefinition): string {
+  return LOWER_CASE_LABELS.get(band) ?? band.label.toLowerCase();
+}
+
+/** The label of the band q falls in, in lower case. */
+export function bandWordsFor(q: number): string {
+  return bandWords(bandFor(q));
+}
+
+const BAND_RANKS: ReadonlyMap<string, number> = new Map(CHECK_BANDS.map((band, rank) => [band, rank]));
+
+/** Position of a band from sharp (0) to unfit (4); -1 for a name that is not a band. */
 export function bandRank(band: CheckBand): number {
-  return CHECK_BANDS.indexOf(band);
+  return BAND_RANKS.get(band) ?? -1;
 }

@@ -15,7 +15,8 @@ export const CONDITION_SCALE: readonly { grade: ConditionGrade; fromScore: numbe
 ];
 
 export function gradeForScore(score: number): ConditionGrade {
-  return (CONDITION_SCALE.find((g) => score >= g.fromScore) ?? CONDITION_SCALE[CONDITION_SCALE.length - 1]!).grade;
+  for (const g of CONDITION_SCALE) if (score >= g.fromScore) return g.grade;
+  return CONDITION_SCALE[CONDITION_SCALE.length - 1]!.grade;
 }
 
 export function gradeRank(grade: ConditionGrade): number {

@@ -10,17 +10,18 @@ import type { DealBreaker } from '../result';
  * not turned into one automatically, because the inspector decides whether it comes from the bearings.
  */
 export function dealBreakersFrom(survey: ParsedLatheSurvey): DealBreaker[] {
-  const recorded = survey.dealBreakers ?? {};
-  return DEAL_BREAKER_ITEMS.flatMap((item) => {
+  const found: DealBreaker[] = [];
+  const recorded = survey.dealBreakers;
+  if (!recorded) return found;
+  for (const item of DEAL_BREAKER_ITEMS) {
     const finding = recorded[item.id];
-    if (!finding?.present) return [];
-    return [
-      {
-        id: item.id,
-        label: item.label,
-        evidence: finding.note?.trim() || 'Seen by the inspector on site; see the photos.',
-        photoRequired: true,
-      },
-    ];
-  });
+    if (!finding?.present) continue;
+    found.push({
+      id: item.id,
+      label: item.label,
+      evidence: finding.note?.trim() || 'Seen by the inspector on site; see the photos.',
+      photoRequired: true,
+    });
+  }
+  return found;
 }

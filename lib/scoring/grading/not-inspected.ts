@@ -21,11 +21,10 @@ export const AREA_LABELS: Readonly<Record<string, string>> = {
  * every check without a reading (with the scorer's reason), so a buyer sees the gaps beside the grade.
  */
 export function notInspectedFrom(survey: ParsedLatheSurvey, confidence: ScoringResult['confidence']): ScoringResult['notInspected'] {
-  const areas = (survey.notInspected ?? []).map((entry) => ({
-    id: `area:${entry.area}`,
-    label: AREA_LABELS[entry.area] ?? entry.area,
-    reason: entry.reason,
-  }));
-  const checks = confidence.missing.map((m) => ({ id: m.checkId, label: m.label, reason: m.reason }));
-  return [...areas, ...checks];
+  const list: ScoringResult['notInspected'] = [];
+  for (const entry of survey.notInspected ?? []) {
+    list.push({ id: `area:${entry.area}`, label: AREA_LABELS[entry.area] ?? entry.area, reason: entry.reason });
+  }
+  for (const m of confidence.missing) list.push({ id: m.checkId, label: m.label, reason: m.reason });
+  return list;
 }

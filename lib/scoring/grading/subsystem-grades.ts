@@ -1,6 +1,6 @@
 import { fmt, roundTo } from '../format-number';
 import type { CheckResult, SubsystemResult } from '../result';
-import { SUBSYSTEM_TABLE, SUBSYSTEMS, type SubsystemId } from '../subsystems';
+import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '../subsystems';
 import { gradeForScore } from './condition-scale';
 
 /**
@@ -10,38 +10,51 @@ import { gradeForScore } from './condition-scale';
  * never raises a grade. Waygrade rule (common practice).
  */
 export function gradeSubsystems(checks: readonly CheckResult[]): SubsystemResult[] {
-  // One pass to sort the checks into their subsystems, in check order.
-  const bySubsystem = new Map<SubsystemId, CheckResult[]>(SUBSYSTEMS.map((id) => [id, []]));
-  for (const c of checks) bySubsystem.get(c.subsystem)?.push(c);
-  return SUBSYSTEMS.map((id) => {
-    const own = bySubsystem.get(id)!;
-    const measured = own.filter((c) => c.status === 'measured' && c.score !== null);
+  const results: SubsystemResult[] = [];
+  for (const id of SUBSYSTEMS) {
+    // One pass per subsystem over the checks, in check order, summing as the weighted mean needs
+    // (same order of additions as a filter and reduce, so the same floating-point sums).
+    let total = 0;
+    let measuredCount = 0;
+    let totalWeight = 0;
+    let weightedSum = 0;
+    let worst: CheckResult | null = null;
+    for (const c of checks) {
+      if (c.subsystem !== id) continue;
+      total++;
+      if (c.status !== 'measured' || c.score === null) continue;
+      measuredCount++;
+      totalWeight += c.weight;
+      weightedSum += c.weight * c.score;
+      // The first of equal worst scores stays the worst, as before.
+      if (worst === null || c.score < worst.score!) worst = c;
+    }
     const { label } = SUBSYSTEM_TABLE[id];
-    if (!measured.length) {
-      return {
+    if (worst === null) {
+      results.push({
         id,
         label,
         score: null,
         grade: null,
         measuredChecks: 0,
-        totalChecks: own.length,
+        totalChecks: total,
         worstCheckId: null,
-        explanation: `Not assessed: none of its ${own.length} checks was measured.`,
-      };
+        explanation: `Not assessed: none of its ${total} checks was measured.`,
+      });
+      continue;
     }
-    const totalWeight = measured.reduce((s, c) => s + c.weight, 0);
-    const mean = measured.reduce((s, c) => s + c.weight * c.score!, 0) / totalWeight;
-    const worst = measured.reduce((a, b) => (b.score! < a.score! ? b : a));
+    const mean = weightedSum / totalWeight;
     const score = roundTo((0.5 * mean + 0.5 * worst.score!), 2);
-    return {
+    results.push({
       id,
       label,
       score,
       grade: gradeForScore(score),
-      measuredChecks: measured.length,
-      totalChecks: own.length,
+      measuredChecks: measuredCount,
+      totalChecks: total,
       worstCheckId: worst.id,
-      explanation: `score = ½ × weighted mean ${fmt(mean, 1)} + ½ × worst (${worst.label}) ${fmt(worst.score!, 1)} = ${fmt(score, 1)}; ${measured.length} of ${own.length} checks measured.`,
-    };
-  });
+      explanation: `score = ½ × weighted mean ${fmt(mean, 1)} + ½ × worst (${worst.label}) ${fmt(worst.score!, 1)} = ${fmt(score, 1)}; ${measuredCount} of ${total} checks measured.`,
+    });
+  }
+  return results;
 }

@@ -1,5 +1,5 @@
 import { fmt } from '../format-number';
-import { bandFor } from '../grading/bands';
+import { bandWordsFor } from '../grading/bands';
 import { ratioForRating } from '../grading/rubric-ratios';
 import { practice } from '../source-marks';
 import { WEAR_RUBRIC } from '../survey/rubrics';
@@ -39,7 +39,7 @@ export const ACCESSORY_CHECKS: readonly LatheCheck[] = [
           ? items.map((i) => `${i.kind}${i.description ? ` (${i.description})` : ''}: ${levels[i.condition]?.label ?? i.condition}`)
           : ['no accessories supplied'],
         formula: items.length ? `q = mean of item ratios = ${fmt(q, 3)}` : `nothing supplied → q = ${NOTHING_SUPPLIED_Q}`,
-        summary: `${items.length} accessories: ${bandFor(q).label.toLowerCase()}.`,
+        summary: `${items.length} accessories: ${bandWordsFor(q)}.`,
       };
     },
   },

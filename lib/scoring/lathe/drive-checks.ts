@@ -7,7 +7,7 @@ import {
   deflectionBySixteenPerMetreRule,
   deflectionBySixtyFourthRule,
 } from '../measure/v-belt';
-import { bandFor } from '../grading/bands';
+import { bandWordsFor } from '../grading/bands';
 import { src } from '../source-marks';
 import { NOISE_RUBRIC, WEAR_RUBRIC } from '../survey/rubrics';
 import { toMillimetres } from '../units/length';
@@ -68,7 +68,7 @@ export const DRIVE_CHECKS: readonly LatheCheck[] = [
           `span t = √(C² − ((D − d)/2)²) = ${fmt(spanMm, 1)} mm`,
         ],
         formula: `q = |measured/target − 1| / ${LATHE_LIMITS.beltDeflection.value} = |${fmt(measured, 2)}/${fmt(target, 2)} − 1| / 0.3 = ${fmt(q, 3)}`,
-        summary: `Belt deflection ${fmt(measured, 1)} mm against a ${fmt(target, 1)} mm target: ${status} (${bandFor(q).label.toLowerCase()}).`,
+        summary: `Belt deflection ${fmt(measured, 1)} mm against a ${fmt(target, 1)} mm target: ${status} (${bandWordsFor(q)}).`,
         details: {
           spanMm: roundTo(spanMm, 2),
           targetSixtyFourthMm: roundTo(target, 3),

@@ -1,6 +1,6 @@
 import { fmt } from '../format-number';
 import { LATHE_LIMITS } from '../limits/lathe-limits';
-import { bandFor } from '../grading/bands';
+import { bandFor, bandWords } from '../grading/bands';
 import { WEAR_RUBRIC } from '../survey/rubrics';
 import { evaluateDeviation } from './evaluate-against-limit';
 import { evaluateDeviceState, evaluateRating } from './evaluate-rated';
@@ -101,7 +101,7 @@ export const ELECTRICAL_CHECKS: readonly LatheCheck[] = [
         q,
         inputs: [`insulation resistance: ${fmt(r.value, 3)} MΩ`],
         formula: `q = required / measured = ${limit.value}/${fmt(Math.max(r.value, SHORT_CIRCUIT_MOHM), 3)} = ${fmt(q, 3)}`,
-        summary: `Insulation ${fmt(r.value, 2)} MΩ against at least ${limit.value} MΩ: ${band.label.toLowerCase()}.`,
+        summary: `Insulation ${fmt(r.value, 2)} MΩ against at least ${limit.value} MΩ: ${bandWords(band)}.`,
         ...(q > 1 ? { safetyFinding: `insulation resistance ${fmt(r.value, 3)} MΩ, below ${limit.value} MΩ: ${FIX}` } : {}),
       };
     },

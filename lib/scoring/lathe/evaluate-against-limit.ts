@@ -1,7 +1,7 @@
 import type { CheckEvaluation, Permissible } from '../check-definition';
 import { deviationRatio } from '../measure/deviation-ratio';
 import { fmt, roundTo } from '../format-number';
-import { bandFor } from '../grading/bands';
+import { bandFor, bandWords } from '../grading/bands';
 import { toMillimetres, type Length } from '../units/length';
 
 /** "0.8 thou = 0.0203 mm" — the entry as typed and as the library uses it. */
@@ -38,8 +38,8 @@ export function evaluateDeviation(input: DeviationCheckInput): CheckEvaluation {
     : `q = |d|/T = ${fmt(Math.abs(input.deviation))}/${fmt(p.value)} = ${fmt(q, 3)}${DIRECTION_WORDS[p.direction]}`;
   const band = bandFor(q);
   const summary = wrongDirection
-    ? `${input.what} ${fmt(input.deviation)} ${input.unit} is the wrong way${input.wrongDirectionText ? ` (${input.wrongDirectionText})` : ''}: ${band.label.toLowerCase()}.`
-    : `${input.what} ${fmt(input.deviation)} ${input.unit} against ${fmt(p.value)} ${p.unit} permitted: ${band.label.toLowerCase()} (${band.meaning}).`;
+    ? `${input.what} ${fmt(input.deviation)} ${input.unit} is the wrong way${input.wrongDirectionText ? ` (${input.wrongDirectionText})` : ''}: ${bandWords(band)}.`
+    : `${input.what} ${fmt(input.deviation)} ${input.unit} against ${fmt(p.value)} ${p.unit} permitted: ${bandWords(band)} (${band.meaning}).`;
   const evaluation: CheckEvaluation = {
     measured: { value: roundTo(input.deviation, 6), unit: input.unit },
     permissible: p,

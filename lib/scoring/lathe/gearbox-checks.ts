@@ -1,6 +1,6 @@
 import { fmt, roundTo } from '../format-number';
 import { ratioFromKnots, type RatioKnot } from '../measure/deviation-ratio';
-import { bandFor } from '../grading/bands';
+import { bandWordsFor } from '../grading/bands';
 import { ratioForRating } from '../grading/rubric-ratios';
 import { practice } from '../source-marks';
 import { DEBRIS_RUBRIC, WEAR_RUBRIC } from '../survey/rubrics';
@@ -67,7 +67,7 @@ export const GEARBOX_CHECKS: readonly LatheCheck[] = [
           (r) => `${r.range}: ${r.rating === undefined ? '' : `rating ${r.rating}`}${r.rating !== undefined && r.db !== undefined ? ', ' : ''}${r.db === undefined ? '' : `${fmt(r.db, 1)} dB(A)`} → q ${fmt(r.q, 3)}`,
         ),
         formula: 'per range q = max(rating ratio, sound-level ratio); check q = worst range',
-        summary: `Noisiest range "${worst.range}": ${bandFor(worst.q).label.toLowerCase()}.`,
+        summary: `Noisiest range "${worst.range}": ${bandWordsFor(worst.q)}.`,
         details: { noisiestRange: worst.range },
       };
     },

@@ -18,6 +18,8 @@ export interface LatheContext {
   distanceBetweenCentresMm: number;
   classFactor: number;
   sizeClassLabel: string;
+  /** " × 1.5 (general-purpose, swing over 800 up to 1600 mm)" after a limit the class factor applies to; "" at factor 1. */
+  classFactorText: string;
   levelSensitivityMmPerM: number | null;
   indicatorResolutionMm: number;
   indicatorResolutionStated: boolean;
@@ -41,12 +43,15 @@ export function buildLatheContext(survey: ParsedLatheSurvey): LatheContext {
   const levelSensitivityMmPerM = sensitivity ? toMillimetresPerMetre(sensitivity) : null;
   const resolution = survey.instruments?.indicatorResolution;
   const klass = swingClass(swingMm);
+  const factor = classFactor(swingMm, m.latheType);
+  const sizeClassLabel = `${m.latheType}, ${klass.label}`;
   return {
     latheType: m.latheType,
     swingMm,
     distanceBetweenCentresMm: toMillimetres(m.distanceBetweenCentres),
-    classFactor: classFactor(swingMm, m.latheType),
-    sizeClassLabel: `${m.latheType}, ${klass.label}`,
+    classFactor: factor,
+    sizeClassLabel,
+    classFactorText: factor === 1 ? '' : ` × ${fmt(factor, 2)} (${sizeClassLabel})`,
     levelSensitivityMmPerM,
     indicatorResolutionMm: resolution ? toMillimetres(resolution) : DEFAULT_INDICATOR_RESOLUTION_MM,
     indicatorResolutionStated: Boolean(resolution),
@@ -89,12 +94,17 @@ function buildBed(survey: ParsedLatheSurvey, sensitivity: number | null): LatheC
   return { profile, twist, stationSpacingMm: spacingMm, unusableReason: null };
 }
 
+/** The stated value of each limit as the basis text begins it ("0.02", "0.0075"), written once at load. */
+const LIMIT_VALUE_TEXT = Object.fromEntries(
+  Object.entries(LATHE_LIMITS).map(([id, entry]) => [id, fmt(entry.value)]),
+) as Readonly<Record<LatheLimitId, string>>;
+
 /** Permissible value for a check on this machine, with how it was arrived at. */
 export function latheLimit(id: LatheLimitId, ctx: LatheContext, measuringLengthMm?: number): Permissible {
   const entry = LATHE_LIMITS[id];
   const factor = entry.classFactorApplies ? ctx.classFactor : 1;
   const base = entry.value * factor;
-  const factorText = factor === 1 ? '' : ` × ${fmt(factor, 2)} (${ctx.sizeClassLabel})`;
+  const factorText = entry.classFactorApplies ? ctx.classFactorText : '';
   const overMm = 'overMm' in entry ? entry.overMm : undefined;
   if (overMm !== undefined && measuringLengthMm !== undefined) {
     const scaled = scaleTolerance({ valueMm: base, overMm }, measuringLengthMm);
@@ -102,7 +112,7 @@ export function latheLimit(id: LatheLimitId, ctx: LatheContext, measuringLengthM
       value: scaled.valueMm,
       unit: entry.unit,
       direction: entry.direction,
-      basis: `${fmt(entry.value)}/${overMm}${factorText} scaled to ${fmt(measuringLengthMm, 1)} mm by the proportional rule (min ${scaled.rule.minimumMm}, step ${scaled.rule.roundingStepMm})`,
+      basis: `${LIMIT_VALUE_TEXT[id]}/${overMm}${factorText} scaled to ${fmt(measuringLengthMm, 1)} mm by the proportional rule (min ${scaled.rule.minimumMm}, step ${scaled.rule.roundingStepMm})`,
       source: entry.source,
     };
   }
@@ -110,7 +120,7 @@ export function latheLimit(id: LatheLimitId, ctx: LatheContext, measuringLengthM
     value: roundTo(base, 6),
     unit: entry.unit,
     direction: entry.direction,
-    basis: `${fmt(entry.value)} ${entry.unit}${overMm !== undefined ? `/${overMm}` : ''}${factorText}`,
+    basis: `${LIMIT_VALUE_TEXT[id]} ${entry.unit}${overMm !== undefined ? `/${overMm}` : ''}${factorText}`,
     source: entry.source,
   };
 }

@@ -2,7 +2,7 @@ import { fmt, roundTo } from '../format-number';
 import { checkViscosityGrade, iso3448Range } from '../measure/iso3448';
 import { formatIso4406, iso4406Code, iso4406Range } from '../measure/iso4406';
 import { LATHE_LIMITS, LATHE_OIL_TARGET } from '../limits/lathe-limits';
-import { bandFor } from '../grading/bands';
+import { bandWordsFor } from '../grading/bands';
 import { DEBRIS_RUBRIC, LEAK_RUBRIC, OIL_CONDITION_RUBRIC, WEAR_RUBRIC } from '../survey/rubrics';
 import { evaluateDeviceState, evaluateOilLevel, evaluateRating } from './evaluate-rated';
 import { notMeasured, type LatheCheck } from './lathe-check';
@@ -103,7 +103,7 @@ export const LUBRICATION_CHECKS: readonly LatheCheck[] = [
         q,
         inputs: [`particles per mL ≥4/≥6/≥14 µm(c): ${values.atLeast4um}/${values.atLeast6um}/${values.atLeast14um}`],
         formula: `code by ISO 4406:1999 Table 1 = ${formatIso4406(code)}; q = max(count / upper limit of target scale number) = ${fmt(q, 3)}`,
-        summary: `Oil cleanliness ${formatIso4406(code)} against target ${target}: ${bandFor(q).label.toLowerCase()}.`,
+        summary: `Oil cleanliness ${formatIso4406(code)} against target ${target}: ${bandWordsFor(q)}.`,
         details: { iso4406: formatIso4406(code), target },
       };
     },
@@ -133,7 +133,7 @@ export const LUBRICATION_CHECKS: readonly LatheCheck[] = [
         q,
         inputs: [`viscosity at 40 °C: ${fmt(v, 2)} mm²/s`, `declared grade: VG ${sample.declaredGrade}`],
         formula: `q = |ν/VG − 1| / 0.10 = |${fmt(v, 2)}/${sample.declaredGrade} − 1| / 0.10 = ${fmt(q, 3)}`,
-        summary: `Viscosity ${fmt(v, 2)} mm²/s is ${result.withinGrade ? 'within' : 'outside'} VG ${sample.declaredGrade}: ${bandFor(q).label.toLowerCase()}.`,
+        summary: `Viscosity ${fmt(v, 2)} mm²/s is ${result.withinGrade ? 'within' : 'outside'} VG ${sample.declaredGrade}: ${bandWordsFor(q)}.`,
         details: { withinGrade: result.withinGrade },
       };
     },

@@ -7,7 +7,7 @@ import {
   vibrationZone,
 } from '../measure/vibration-zone';
 import { LATHE_LIMITS } from '../limits/lathe-limits';
-import { bandFor } from '../grading/bands';
+import { bandWordsFor } from '../grading/bands';
 import { src } from '../source-marks';
 import { toMillimetres, type Length } from '../units/length';
 import { describeLength, evaluateDeviation } from './evaluate-against-limit';
@@ -154,7 +154,7 @@ export const SPINDLE_CHECKS: readonly LatheCheck[] = [
         q,
         inputs: [`vibration velocity: ${fmt(v.value, 2)} mm/s RMS`],
         formula: `q interpolated through A/B → 0.5, B/C → 1, C/D → 2: q = ${fmt(q, 3)}`,
-        summary: `Vibration ${fmt(v.value, 2)} mm/s is zone ${zone} for class ${klass}: ${bandFor(q).label.toLowerCase()}.`,
+        summary: `Vibration ${fmt(v.value, 2)} mm/s is zone ${zone} for class ${klass}: ${bandWordsFor(q)}.`,
         details: { zone, vibrationClass: klass },
       };
     },

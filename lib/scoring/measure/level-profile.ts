@@ -62,10 +62,38 @@ export function heightProfile(
 }
 
 export function straightnessAgainst(points: readonly Point[], line: Line): StraightnessAgainstLine {
-  const deviationsUm = points.map((p) => p.z - lineAt(line, p.x));
-  const maxAboveUm = Math.max(0, ...deviationsUm);
-  const maxBelowUm = Math.min(0, ...deviationsUm);
+  const deviationsUm: number[] = [];
+  // Math.max/min step by step equal Math.max(0, ...all) and Math.min(0, ...all), NaN and ±0 included.
+  let maxAboveUm = 0;
+  let maxBelowUm = 0;
+  for (const p of points) {
+    const d = p.z - lineAt(line, p.x);
+    deviationsUm.push(d);
+    maxAboveUm = Math.max(maxAboveUm, d);
+    maxBelowUm = Math.min(maxBelowUm, d);
+  }
   return { line, deviationsUm, maxAboveUm, maxBelowUm, straightnessUm: maxAboveUm - maxBelowUm };
+}
+
+/**
+ * Straightness of points[from..to] against the chord through its end points: the same arithmetic
+ * as straightnessAgainst(segment, endPointLine(segment)), without copying the segment or keeping
+ * the deviations (every window of the local check runs through here).
+ */
+function chordStraightness(points: readonly Point[], from: number, to: number): number {
+  const first = points[from]!;
+  const last = points[to]!;
+  const slope = last.x === first.x ? 0 : (last.z - first.z) / (last.x - first.x);
+  const line: Line = last.x === first.x ? { slope: 0, intercept: first.z } : { slope, intercept: first.z - slope * first.x };
+  let maxAbove = 0;
+  let maxBelow = 0;
+  for (let k = from; k <= to; k++) {
+    const p = points[k]!;
+    const d = p.z - lineAt(line, p.x);
+    maxAbove = Math.max(maxAbove, d);
+    maxBelow = Math.min(maxBelow, d);
+  }
+  return maxAbove - maxBelow;
 }
 
 export function endPointLine(points: readonly Point[]): Line {
@@ -95,8 +123,7 @@ export function worstLocalStraightness(points: readonly Point[], windowMm: numbe
       const a = points[i];
       const b = points[j];
       if (!a || !b || b.x - a.x > windowMm + 1e-9) break;
-      const segment = points.slice(i, j + 1);
-      const s = straightnessAgainst(segment, endPointLine(segment)).straightnessUm;
+      const s = chordStraightness(points, i, j);
       worst = worst === null ? s : Math.max(worst, s);
     }
   }

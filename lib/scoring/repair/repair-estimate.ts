@@ -18,7 +18,8 @@ export interface RepairEstimate {
 }
 
 interface CatalogueIndex {
-  rulesByCheck: Map<string, RepairRule[]>;
+  /** Each check's rules, with the rank of the band each starts from (bandRank, worked out once). */
+  rulesByCheck: Map<string, { rule: RepairRule; fromRank: number }[]>;
   actionsById: Map<string, RepairAction>;
 }
 
@@ -28,8 +29,13 @@ const INDEXES = new WeakMap<RepairCostCatalogue, CatalogueIndex>();
 function indexOf(catalogue: RepairCostCatalogue): CatalogueIndex {
   let index = INDEXES.get(catalogue);
   if (!index) {
-    const rulesByCheck = new Map<string, RepairRule[]>();
-    for (const rule of catalogue.rules) rulesByCheck.set(rule.checkId, [...(rulesByCheck.get(rule.checkId) ?? []), rule]);
+    const rulesByCheck: CatalogueIndex['rulesByCheck'] = new Map();
+    for (const rule of catalogue.rules) {
+      const ranked = { rule, fromRank: bandRank(rule.fromBand) };
+      const list = rulesByCheck.get(rule.checkId);
+      if (list) list.push(ranked);
+      else rulesByCheck.set(rule.checkId, [ranked]);
+    }
     index = { rulesByCheck, actionsById: new Map(catalogue.actions.map((a) => [a.id, a])) };
     INDEXES.set(catalogue, index);
   }
@@ -50,12 +56,11 @@ export function estimateRepairs(checks: readonly CheckResult[], catalogue: Repai
     const reachedRank = bandRank(check.band);
     // The most severe band among the rules this check's band reaches; every rule from that band applies.
     let mostSevere = Number.NEGATIVE_INFINITY;
-    for (const rule of rules) {
-      const from = bandRank(rule.fromBand);
-      if (from <= reachedRank && from > mostSevere) mostSevere = from;
+    for (const { fromRank } of rules) {
+      if (fromRank <= reachedRank && fromRank > mostSevere) mostSevere = fromRank;
     }
-    for (const rule of rules) {
-      if (bandRank(rule.fromBand) !== mostSevere) continue;
+    for (const { rule, fromRank } of rules) {
+      if (fromRank !== mostSevere) continue;
       const by = triggered.get(rule.actionId);
       if (by) by.push(check.id);
       else triggered.set(rule.actionId, [check.id]);
@@ -65,10 +70,16 @@ export function estimateRepairs(checks: readonly CheckResult[], catalogue: Repai
   for (const actionId of triggered.keys()) {
     for (const s of actionsById.get(actionId)?.supersedes ?? []) superseded.add(s);
   }
-  const lines: RepairLine[] = catalogue.actions
-    .filter((a) => triggered.has(a.id) && !superseded.has(a.id))
-    .map((a) => ({ actionId: a.id, label: a.label, cost: money(a.costMinor, catalogue.currency), triggeredBy: triggered.get(a.id)! }));
-  const total = money(lines.reduce((s, l) => s + l.cost.amountMinor, 0), catalogue.currency);
+  const lines: RepairLine[] = [];
+  let totalMinor = 0;
+  for (const a of catalogue.actions) {
+    const by = triggered.get(a.id);
+    if (!by || superseded.has(a.id)) continue;
+    const cost = money(a.costMinor, catalogue.currency);
+    totalMinor += cost.amountMinor;
+    lines.push({ actionId: a.id, label: a.label, cost, triggeredBy: by });
+  }
+  const total = money(totalMinor, catalogue.currency);
   const droppedText = [...superseded].filter((id) => triggered.has(id));
   return {
     catalogueId: catalogue.id,
