@@ -4,6 +4,7 @@ import { alias } from 'drizzle-orm/mysql-core';
 import { db } from '@/db/client';
 import { machines, photos, reports, users } from '@/db/schema';
 import type { ScoringResult } from '@/lib/scoring';
+import { parseReleaseFacts } from '@/lib/decision/release-facts';
 
 const inspector = alias(users, 'inspector');
 const reviewer = alias(users, 'reviewer');
@@ -14,9 +15,11 @@ export async function findReportForDocument(reportId: number) {
     .select({
       id: reports.id,
       inspectionId: reports.inspectionId,
+      machineId: reports.machineId,
       version: reports.version,
       status: reports.status,
       result: reports.result,
+      releaseFacts: reports.releaseFacts,
       verificationCode: reports.verificationCode,
       releasedAt: reports.releasedAt,
       inspectorName: inspector.name,
@@ -50,6 +53,7 @@ export async function findReportForDocument(reportId: number) {
   return {
     ...row,
     result: row.result as ScoringResult,
+    releaseFacts: parseReleaseFacts(row.releaseFacts),
     machine: { ...row.machine, motorKw: row.machine.motorKw === null ? null : Number(row.machine.motorKw) },
     photos: photoRows,
   };

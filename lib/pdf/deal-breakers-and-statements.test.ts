@@ -38,6 +38,7 @@ function documentFor(surveyFile: string): ReportDocumentData {
     },
     inspectorName: 'Ilse Marwick',
     reviewerName: 'Nadia Ferrand',
+    releaseFacts: null,
     result: scoreSurvey(survey),
     photos: [],
   };

@@ -55,6 +55,7 @@ describe('renderReportPdf', () => {
       },
       inspectorName: 'Ilse Marwick',
       reviewerName: 'Nadia Ferrand',
+      releaseFacts: null,
       result,
       photos: [{ section: 'bed', caption: 'Step in the front way near the chuck', image: { data: photo, format: 'jpg' } }],
     };

@@ -1,3 +1,4 @@
+import type { ReleaseFacts } from '@/lib/decision/release-facts';
 import type { ScoringResult } from '@/lib/scoring';
 
 /** A photo ready to print: the image bytes are fetched before rendering, never during it. */
@@ -30,5 +31,7 @@ export interface ReportDocumentData {
   inspectorName: string | null;
   reviewerName: string | null;
   result: ScoringResult;
+  /** The disclosure, landed-cost basis and thermal states kept at release (for a draft, as they stand now); null for versions released before they were kept. */
+  releaseFacts: ReleaseFacts | null;
   photos: ReportPhoto[];
 }

@@ -1,4 +1,5 @@
 import { Document } from '@react-pdf/renderer';
+import { ClaimsAndLandedCostPage } from './claims-and-landed-cost-page';
 import { CoverPage } from './cover-page';
 import { LimitsPage } from './limits-page';
 import type { FrameFacts } from './page-frame';
@@ -8,7 +9,7 @@ import { RepairsValuationPage } from './repairs-valuation-page';
 import type { ReportDocumentData } from './report-document-data';
 import { SubsystemPage } from './subsystem-page';
 
-/** The printed condition report: cover, reading guide, one page per subsystem, photos, money, limits. */
+/** The printed condition report: cover, reading guide, one page per subsystem, photos, money, the seller's claims and landed cost, limits. */
 export function ReportDocument({ data }: { data: ReportDocumentData }) {
   const title = `${data.machine.maker} ${data.machine.model}`;
   const frame: FrameFacts = {
@@ -35,6 +36,7 @@ export function ReportDocument({ data }: { data: ReportDocumentData }) {
       ))}
       <PhotosPage photos={data.photos} frame={frame} />
       <RepairsValuationPage result={data.result} frame={frame} />
+      <ClaimsAndLandedCostPage facts={data.releaseFacts} result={data.result} releasedAt={data.releasedAt} frame={frame} />
       <LimitsPage data={data} frame={frame} />
     </Document>
   );

@@ -1,5 +1,7 @@
 import 'server-only';
+import { db } from '@/db/client';
 import { findReportForDocument } from '@/db/queries/report-document';
+import { collectReleaseFacts } from '@/db/queries/release-facts';
 import { env } from '@/lib/env';
 import { publicFileUrl } from '@/lib/storage/file-url';
 import { AppError } from '@/lib/errors';
@@ -30,6 +32,11 @@ export async function reportPdf(reportId: number, cache = pdfCache()): Promise<{
   const { photos, complete } = await loadReportPhotos(
     report.photos.map((p) => ({ section: p.section, caption: p.caption, url: p.displayKey ? publicFileUrl(p.displayKey) : p.originalUrl })),
   );
+  // A draft shows what its release would keep; a released version shows the copy kept with it.
+  const releaseFacts =
+    report.status === 'draft'
+      ? await collectReleaseFacts(db, { machineId: report.machineId, inspectionId: report.inspectionId, motorPowerKw: report.result.machine.motorPowerKw })
+      : report.releaseFacts;
   const data: ReportDocumentData = {
     reportId: report.id,
     version: report.version,
@@ -40,6 +47,7 @@ export async function reportPdf(reportId: number, cache = pdfCache()): Promise<{
     inspectorName: report.inspectorName,
     reviewerName: report.reviewerName,
     result: report.result,
+    releaseFacts,
     photos,
   };
   const pdf = await renderReportPdf(data);

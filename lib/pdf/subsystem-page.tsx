@@ -9,6 +9,7 @@ import { FramedPage, type FrameFacts } from './page-frame';
 import { pdfText } from './pdf-text';
 import type { ReportDocumentData } from './report-document-data';
 import { COLOURS, styles } from './theme';
+import { ThermalStatesBlock } from './thermal-states-block';
 
 /** One subsystem: its grade, how it was reached, every check, and the plots that belong to it. */
 export function SubsystemPage({
@@ -47,6 +48,7 @@ export function SubsystemPage({
           <Text style={{ marginTop: 3, color: COLOURS.inkSoft }}>Weakest point: {pdfText(worst.explanation.text.split('. Permissible')[0] ?? worst.label)}.</Text>
         ) : null}
       </View>
+      {data.releaseFacts ? <ThermalStatesBlock states={data.releaseFacts.thermalStates} subsystemId={subsystem.id} result={data.result} /> : null}
       <CheckTable checks={checks} />
       {subsystem.id === 'bed-and-ways' && profile ? <BedProfilePlot profile={profile} /> : null}
       {/* Results from before scoring 1.1 have no wear series. */}
