@@ -19,18 +19,36 @@ const STATUS_LOOKS: Record<ClaimStatus, { word: string; className: string; shape
   'not-compared': { word: 'Not compared', className: 'text-ink-soft', shape: <path d="M3 8h10" stroke="currentColor" strokeWidth="2.6" strokeLinecap="round" /> },
 };
 
-export function DisclosurePanel({ assessments, answeredOn, keptWithVersion }: { assessments: ClaimAssessment[] | null; answeredOn: Date | null; keptWithVersion: boolean }) {
+/**
+ * The seller's claims beside the findings. On a released report (`stage` 'released') the answers
+ * are the copy kept with the version; on the review screen ('review') they are the answers a release
+ * would keep now.
+ */
+export function DisclosurePanel({
+  assessments,
+  answeredOn,
+  keptWithVersion,
+  stage = 'released',
+}: {
+  assessments: ClaimAssessment[] | null;
+  answeredOn: Date | null;
+  keptWithVersion: boolean;
+  stage?: 'released' | 'review';
+}) {
   const contradicted = assessments?.filter((a) => a.status === 'contradicted').length ?? 0;
   return (
     <Card title="The seller’s claims beside the findings" className="mt-6">
       {!keptWithVersion ? (
         <p className="text-ink-soft">This version was released before the seller’s answers were kept with each report, so none are shown.</p>
       ) : !assessments ? (
-        <p className="text-ink-soft">The seller had not answered the disclosure questions when this version was released.</p>
+        <p className="text-ink-soft">
+          {stage === 'review' ? 'The seller has not answered the disclosure questions for this machine.' : 'The seller had not answered the disclosure questions when this version was released.'}
+        </p>
       ) : (
         <>
           <p className="figures text-ink-soft">
-            Answers as given on {answeredOn ? formatDate(answeredOn) : ''} and kept with this version at release.{' '}
+            Answers as given on {answeredOn ? formatDate(answeredOn) : ''}
+            {stage === 'review' ? '; releasing keeps a copy of them with this version.' : ' and kept with this version at release.'}{' '}
             {contradicted === 0 ? 'No claim is contradicted by the findings.' : `${contradicted} ${contradicted === 1 ? 'claim is' : 'claims are'} contradicted by the findings.`}
           </p>
           <ul className="mt-4 divide-y divide-line">

@@ -4,13 +4,17 @@ import { notFound } from 'next/navigation';
 import { BandBadge } from '@/components/ui/band-badge';
 import { Card } from '@/components/ui/card';
 import { StatusPill } from '@/components/ui/status-pill';
+import { db } from '@/db/client';
 import { getInspection, getReviewBundle } from '@/db/queries/inspections';
+import { collectReleaseFacts } from '@/db/queries/release-facts';
+import { parseReleaseFacts } from '@/lib/decision/release-facts';
 import { requirePageSession } from '@/lib/auth/session';
 import { publicFileUrl } from '@/lib/storage/file-url';
 import { formatDateTime, formatMoney } from '@/lib/format';
 import { can, mayTransition } from '@/lib/roles';
 import type { ScoringResult } from '@/lib/scoring';
 import { ReviewActions } from './review-actions';
+import { BedPlotsCard, NotInspectedCard, ReviewDealBreakers, ReviewDisclosure } from './review-findings';
 import { SurveyReadings } from './survey-readings';
 
 export const metadata: Metadata = { title: 'Review' };
@@ -24,6 +28,9 @@ export default async function ReviewPage({ params }: { params: Promise<{ inspect
   const { inspection, machine } = inspectionBundle;
   const { report, survey, photos } = await getReviewBundle(id);
   const result = report?.result as ScoringResult | undefined;
+  // A released version shows the copy kept with it; a draft what releasing it would keep now.
+  const kept = report && report.status !== 'draft' ? parseReleaseFacts(report.releaseFacts) : null;
+  const facts = kept ?? (result && report?.status === 'draft' ? await collectReleaseFacts(db, { machineId: machine.id, inspectionId: inspection.id, motorPowerKw: result.machine.motorPowerKw }) : null);
 
   const decisions = [
     ...(report?.status === 'draft' && mayTransition(user.role, inspection.status, 'released') ? (['release'] as const) : []),
@@ -53,6 +60,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ inspect
         </Card>
       ) : (
         <>
+          <ReviewDealBreakers result={result} />
           <section aria-label="Summary" className="mt-6 grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
             <Stat label="Overall condition" value={report.overallCondition} sub={`score ${report.overallScore} of 100`} />
             <Stat label="Confidence" value={`${Math.round(Number(report.confidence) * 100)} %`} sub={`${result.confidence.measuredChecks} of ${result.confidence.totalChecks} checks measured`} />
@@ -70,6 +78,10 @@ export default async function ReviewPage({ params }: { params: Promise<{ inspect
               </ul>
             </div>
           ) : null}
+
+          <NotInspectedCard result={result} />
+          {facts ? <ReviewDisclosure facts={facts} result={result} stage={report.status === 'draft' ? 'review' : 'released'} /> : null}
+          <BedPlotsCard result={result} />
 
           <div className="mt-6 grid gap-6 xl:grid-cols-[3fr_2fr]">
             <div className="space-y-6">
@@ -146,7 +158,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ inspect
                 )}
               </Card>
               <Card title="Readings as entered">
-                {survey ? <SurveyReadings data={survey.data as Record<string, unknown>} /> : <p>No survey.</p>}
+                {survey ? <SurveyReadings data={survey.data as Record<string, unknown>} thermalStates={facts?.thermalStates} /> : <p>No survey.</p>}
                 {survey ? <p className="figures mt-3 text-sm text-ink-soft">Survey version {survey.version}, format v{survey.formatVersion}, scored with library {report.scoringVersion}</p> : null}
               </Card>
             </div>

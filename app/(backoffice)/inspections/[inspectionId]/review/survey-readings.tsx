@@ -1,4 +1,6 @@
 import { SURVEY_SECTIONS } from '@/lib/survey/survey-sections';
+import type { SectionThermalState } from '@/lib/survey/thermal-state';
+import { ThermalStateMark } from '../../../reports/[id]/thermal-state-mark';
 
 /**
  * The raw survey as the inspector entered it, section by section, so the reviewer can set each
@@ -31,13 +33,22 @@ function flatten(value: unknown, path: string[] = []): Array<[string, string]> {
   return [[path.map(words).join(' › '), String(value)]];
 }
 
-export function SurveyReadings({ data }: { data: Record<string, unknown> }) {
+export function SurveyReadings({ data, thermalStates = [] }: { data: Record<string, unknown>; thermalStates?: readonly SectionThermalState[] }) {
   const sections = Object.entries(data).filter(([key]) => key in SECTION_LABELS);
+  const thermalOf = new Map(thermalStates.map((t) => [t.section as string, t]));
   return (
     <div className="space-y-4">
       {sections.map(([key, value]) => (
         <details key={key} className="rounded-lg border border-line" open={key === 'bedAndWays'}>
-          <summary className="min-h-touch cursor-pointer px-4 py-2.5 font-medium">{SECTION_LABELS[key]}</summary>
+          <summary className="min-h-touch cursor-pointer px-4 py-2.5 font-medium">
+            {SECTION_LABELS[key]}
+            {thermalOf.get(key) ? (
+              <span className="ml-3 text-sm" data-thermal-section={key}>
+                <ThermalStateMark state={thermalOf.get(key)!} />
+              </span>
+            ) : null}
+          </summary>
+          {thermalOf.get(key) ? <p className="px-4 pb-2 text-sm text-ink-soft">{thermalOf.get(key)!.explanation}.</p> : null}
           <dl className="figures grid grid-cols-1 gap-x-4 gap-y-1 px-4 pb-3 text-sm sm:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
             {flatten(value).map(([label, text]) => (
               <div key={label} className="contents">
