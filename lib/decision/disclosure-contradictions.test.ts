@@ -4,6 +4,7 @@ import nearNew from '@/lib/scoring/examples/near-new.json';
 import worn from '@/lib/scoring/examples/worn.json';
 import safetyDefect from '@/lib/scoring/examples/safety-defect.json';
 import mostlyUnmeasured from '@/lib/scoring/examples/mostly-unmeasured.json';
+import dealBreaker from '@/lib/scoring/examples/deal-breaker.json';
 import { assessDisclosure, POWER_ON_CHECKS } from './disclosure-contradictions';
 import type { SellerDisclosure } from './seller-disclosure';
 
@@ -33,6 +34,14 @@ describe('assessDisclosure', () => {
     expect(a.status).toBe('contradicted');
     expect(a.claim).toBe('No known faults');
     expect(a.findings).toContain(`${faulty[0]!.label}: ${faulty[0]!.bandLabel}`);
+  });
+
+  it('contradicts "no known faults" when the inspector found a deal-breaker, and names it first', () => {
+    const r = scoreSurvey(dealBreaker);
+    expect(r.dealBreakers.length).toBeGreaterThan(0);
+    const a = statusOf(claims, dealBreaker)['known-faults']!;
+    expect(a.status).toBe('contradicted');
+    expect(a.findings[0]).toBe(`Deal-breaker: ${r.dealBreakers[0]!.label}`);
   });
 
   it('contradicts "no known faults" when there is a safety finding', () => {

@@ -44,6 +44,8 @@ function knownFaults(d: SellerDisclosure, r: ScoringResult): ClaimAssessment {
   const base = { claimId: 'known-faults' as const, question: 'Known faults' };
   if (d.knownFaults.trim()) return { ...base, claim: d.knownFaults.trim(), status: 'not-compared', findings: [] };
   const findings = [
+    // A deal-breaker the inspector saw (results from scoring 1.1 on) is a fault a seller would know of.
+    ...(r.dealBreakers ?? []).map((d) => `Deal-breaker: ${d.label}`),
     ...r.checks.filter((c) => c.band !== null && FAULT_BANDS.has(c.band)).map(describeCheck),
     ...r.safetyFindings.map((s) => `Safety: ${s.message}`),
   ];
