@@ -4,4 +4,7 @@ export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return;
   const { startOutboxWorker } = await import('@/lib/mail/worker');
   startOutboxWorker();
+  // Refunds owed for re-inspections cancelled by a sale are tried again until the provider accepts them.
+  const { startReinspectionRefundWorker } = await import('@/lib/reinspection/refund-worker');
+  startReinspectionRefundWorker();
 }

@@ -28,6 +28,7 @@ export const PERMISSIONS = [
   'report.browse',
   'report.buy',
   'report.download.granted',
+  'reinspection.request',
   'compare.use',
   'fees.manage',
   'payments.refund',
@@ -38,10 +39,10 @@ export const PERMISSIONS = [
 export type Permission = (typeof PERMISSIONS)[number];
 
 export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
-  seller: ['machine.list.own', 'machine.edit.own', 'inspection.request', 'inspection.view.own', 'report.download.granted'],
+  seller: ['machine.list.own', 'machine.edit.own', 'inspection.request', 'inspection.view.own', 'report.download.granted', 'reinspection.request'],
   inspector: ['survey.edit.assigned', 'survey.submit.assigned', 'report.download.granted'],
-  buyer: ['report.browse', 'report.buy', 'report.download.granted'],
-  dealer: ['report.browse', 'report.buy', 'report.download.granted', 'compare.use'],
+  buyer: ['report.browse', 'report.buy', 'report.download.granted', 'reinspection.request'],
+  dealer: ['report.browse', 'report.buy', 'report.download.granted', 'reinspection.request', 'compare.use'],
   admin: [
     'inspection.queue',
     'inspection.book',

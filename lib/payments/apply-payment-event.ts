@@ -1,9 +1,10 @@
 import 'server-only';
 import type Stripe from 'stripe';
-import { eq } from 'drizzle-orm';
-import { orders, paymentEvents } from '@/db/schema';
+import { and, eq } from 'drizzle-orm';
+import { orders, paymentEvents, reinspectionRequests } from '@/db/schema';
 import { findOrderIdByPaymentIntent, lockOrderWithContext } from '@/db/queries/purchases';
 import type { Transaction } from '@/lib/auth/operation';
+import { confirmReinspectionPayment, type ReinspectionPaymentOutcome } from '@/lib/reinspection/confirm-reinspection-payment';
 import { markOrderPaid, markOrderRefunded } from './order-transitions';
 
 /** What the app needs from the provider while handling an event; the SDK in production, fakes in tests. */
@@ -22,7 +23,8 @@ export type PaymentEventOutcome =
   | 'expired'
   | 'unchanged'
   | 'unknown-order'
-  | 'ignored';
+  | 'ignored'
+  | ReinspectionPaymentOutcome;
 
 export const WITHDRAWN_REPORT_REFUND_REASON = 'The report was withdrawn before your payment completed, so it could not be delivered.';
 export const PROVIDER_REFUND_REASON = 'Refunded by Waygrade.';
@@ -78,6 +80,10 @@ async function sessionCompleted(tx: Transaction, session: Stripe.Checkout.Sessio
     }
     return { outcome: 'unchanged' as const, orderId };
   }
+  // A re-inspection pays for a visit: the order's report is only the one it was requested from.
+  if (order.purpose === 'reinspection') {
+    return { outcome: await confirmReinspectionPayment(tx, ctx, { paymentIntentId, provider, now }), orderId };
+  }
   if (ctx.report.status === 'withdrawn') {
     if (!paymentIntentId) return { outcome: 'unchanged' as const, orderId };
     const { refundId } = await provider.refundPayment({ orderId: order.id, paymentIntentId, reason: WITHDRAWN_REPORT_REFUND_REASON });
@@ -95,6 +101,9 @@ async function sessionExpired(tx: Transaction, session: Stripe.Checkout.Session)
   if (!ctx || ctx.order.providerCheckoutSessionId !== session.id) return { outcome: 'unknown-order' as const, orderId };
   if (ctx.order.status !== 'pending') return { outcome: 'unchanged' as const, orderId };
   await tx.update(orders).set({ status: 'expired' }).where(eq(orders.id, ctx.order.id));
+  if (ctx.order.purpose === 'reinspection') {
+    await tx.update(reinspectionRequests).set({ status: 'expired' }).where(and(eq(reinspectionRequests.orderId, ctx.order.id), eq(reinspectionRequests.status, 'awaiting_payment')));
+  }
   return { outcome: 'expired' as const, orderId };
 }
 

@@ -2,6 +2,7 @@ import 'server-only';
 import { and, eq, isNull } from 'drizzle-orm';
 import { orders, reportAccessGrants } from '@/db/schema';
 import type { OrderWithContext } from '@/db/queries/purchases';
+import { markReinspectionRequestRefunded } from '@/db/queries/reinspection-requests';
 import type { Transaction } from '@/lib/auth/operation';
 import { appLink } from '@/lib/mail/links';
 import { enqueueEmail } from '@/lib/mail/outbox';
@@ -62,6 +63,8 @@ export async function markOrderRefunded(
     .update(reportAccessGrants)
     .set({ revokedAt: input.at })
     .where(and(eq(reportAccessGrants.orderId, order.id), isNull(reportAccessGrants.revokedAt)));
+  const reinspection = order.purpose === 'reinspection';
+  if (reinspection) await markReinspectionRequestRefunded(tx, order.id, input.at);
   await enqueueEmail(tx, {
     to: ctx.buyer.email,
     template: 'refund',
@@ -69,7 +72,8 @@ export async function markOrderRefunded(
       recipientName: ctx.buyer.name,
       receiptNumber: receiptNumber(order.id),
       machine: ctx.machine,
-      reportCode: ctx.report.verificationCode,
+      // A re-inspection fee pays for a visit, not for the report it was requested from.
+      reportCode: reinspection ? null : ctx.report.verificationCode,
       amountMinor: order.amountMinor,
       currency: order.currency,
       refundedAt: input.at,

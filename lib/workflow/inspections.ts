@@ -5,6 +5,9 @@ import { defineOperation, type Transaction } from '@/lib/auth/operation';
 import { AppError } from '@/lib/errors';
 import { enqueueEmail } from '@/lib/mail/outbox';
 import { appLink } from '@/lib/mail/links';
+import { cancelReinspectionsBeforeVisit } from '@/lib/reinspection/refund-reinspections';
+import { lazyProvider } from '@/lib/reinspection/listing-ended';
+import { stripePaymentProvider } from '@/lib/payments/stripe-payment-provider';
 import { bookingSchema, cancelSchema, inspectionRequestSchema } from '@/lib/validation/inspection';
 import { lockInspectionForTransition, ownsMachine, takesPartIn } from './inspection-access';
 import { moveInspection } from './status-events';
@@ -133,6 +136,14 @@ export const cancelInspection = defineOperation({
     });
     const parties = await loadParties(tx, current.id);
     const machine = { maker: parties.maker, model: parties.model, serialNumber: parties.serialNumber };
+    // Paid re-inspections of this visit get their fee back: the visit they paid for will not happen.
+    if (current.status === 'requested' || current.status === 'booked') {
+      await cancelReinspectionsBeforeVisit(
+        tx,
+        { machineId: current.machineId, onlyInspectionId: current.id, reason: `The re-inspection visit was cancelled before it started (${input.reason}), so the fee is refunded.`, actorId: actor!.id, cancelledBy: actor!.name ?? 'Waygrade' },
+        lazyProvider(() => stripePaymentProvider()),
+      );
+    }
     const cancelledBy = actor!.role === 'admin' ? `${actor!.name ?? 'A coordinator'} (Waygrade)` : (actor!.name ?? 'The seller');
     await enqueueEmail(tx, {
       to: parties.sellerEmail,

@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { machinePriceChanges, machines } from '@/db/schema';
 import { defineOperation } from '@/lib/auth/operation';
 import { sizeClassForSwing } from '@/lib/machine-size';
+import { endReinspectionsWhenListingEnds } from '@/lib/reinspection/listing-ended';
 import { machineFormSchema, type MachineForm } from '@/lib/validation/machine';
 import { ownsMachine } from './inspection-access';
 
@@ -49,10 +50,16 @@ export const updateMachine = defineOperation({
   access: 'machine.edit.own',
   input: machineFormSchema.extend({ machineId: z.coerce.number().int().positive() }),
   authorize: ({ actor, input }) => ownsMachine(actor, input.machineId),
-  async run({ input, tx }) {
+  async run({ actor, input, tx }) {
     const values = machineValues(input);
-    const [before] = await tx.select({ askingPriceMinor: machines.askingPriceMinor }).from(machines).where(eq(machines.id, input.machineId)).for('update');
+    const [before] = await tx
+      .select({ askingPriceMinor: machines.askingPriceMinor, listingStatus: machines.listingStatus })
+      .from(machines)
+      .where(eq(machines.id, input.machineId))
+      .for('update');
     await tx.update(machines).set(values).where(eq(machines.id, input.machineId));
+    // Sold or withdrawn through the edit form: the same cancellation and refunds as the one-click change.
+    await endReinspectionsWhenListingEnds(tx, { machineId: input.machineId, from: before?.listingStatus ?? null, to: values.listingStatus, actor: actor! });
     // Price history: a row only when the asking price actually changes.
     if (before && before.askingPriceMinor !== values.askingPriceMinor) {
       await tx.insert(machinePriceChanges).values({ machineId: input.machineId, askingPriceMinor: values.askingPriceMinor });

@@ -7,6 +7,7 @@ import { defineOperation, type Transaction } from '@/lib/auth/operation';
 import { AppError } from '@/lib/errors';
 import { appLink } from '@/lib/mail/links';
 import { enqueueEmail } from '@/lib/mail/outbox';
+import { deliverReinspectionReport } from '@/lib/reinspection/deliver-reinspection-report';
 import { reviewDecisionSchema, sendBackSchema } from '@/lib/validation/inspection';
 import { lockInspectionForTransition } from './inspection-access';
 import { moveInspection } from './status-events';
@@ -59,6 +60,14 @@ export const releaseReport = defineOperation({
         ),
       );
     const earlierBuyers = [...new Map(earlierGrants.map((g) => [g.userId, g])).values()];
+    // Whoever paid for this visit as a re-inspection gets the new report without paying again.
+    await deliverReinspectionReport(tx, {
+      inspectionId: inspection.id,
+      reportId: released.id,
+      reportCode: released.verificationCode,
+      overallCondition: released.overallCondition,
+      machine: machineSummary,
+    });
     for (const buyer of earlierBuyers) {
       await tx.insert(reportAccessGrants).values({ reportId: released.id, userId: buyer.userId, reason: 'purchase', orderId: buyer.orderId });
       await enqueueEmail(tx, {

@@ -5,6 +5,8 @@ import { inspectionCancelled } from './inspection-cancelled';
 import { invitation } from './invitation';
 import { paymentReceipt } from './payment-receipt';
 import { refund } from './refund';
+import { reinspectionPaid } from './reinspection-paid';
+import { reinspectionReportReady } from './reinspection-report-ready';
 import { reportReleased } from './report-released';
 import { resetPassword } from './reset-password';
 import { surveyReturned } from './survey-returned';
@@ -24,6 +26,8 @@ export const MAIL_TEMPLATES = {
   'report-released': reportReleased,
   'payment-receipt': paymentReceipt,
   refund,
+  'reinspection-paid': reinspectionPaid,
+  'reinspection-report-ready': reinspectionReportReady,
 } as const satisfies Record<string, (data: never) => RenderedMail>;
 
 export type MailTemplateName = keyof typeof MAIL_TEMPLATES;

@@ -51,6 +51,14 @@ const SAMPLES: { [N in MailTemplateName]: { data: MailTemplateData<N>; mustSay: 
     data: { recipientName: HOSTILE, receiptNumber: 'R-2026-0042', machine: MACHINE, reportCode: null, amountMinor: 18900, currency: 'EUR', refundedAt: WHEN, reason: 'Inspection cancelled' },
     mustSay: ['€189', 'Inspection cancelled'],
   },
+  'reinspection-paid': {
+    data: { recipientName: HOSTILE, receiptNumber: 'WGR-000042', machine: MACHINE, amountMinor: 39_000, currency: 'EUR', paidAt: WHEN, url: LINK },
+    mustSay: ['WGR-000042', '€390', 'Re-inspection', 'refunded to you automatically', 'Once the visit has started there is no automatic refund'],
+  },
+  'reinspection-report-ready': {
+    data: { recipientName: HOSTILE, machine: MACHINE, reportCode: 'WG-7K3P-Q9XD-4MRT', overallCondition: 'Fair', url: LINK },
+    mustSay: ['WG-7K3P-Q9XD-4MRT', 'no further charge', 'Fair'],
+  },
 };
 
 describe('the mail templates', () => {
