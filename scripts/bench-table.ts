@@ -56,11 +56,14 @@ const TARGET_P95_MS = 50;
 const DEALER = { email: 'bram@quayside-machinery.example', password: 'demo-lathe-2026' };
 
 /**
- * Pages a dealer asks for: grades, a swing band and a year, page 2. The first sorts by an indexed
- * column (the index is read in order and stops at the page); the second by asking price, a nullable
- * figure whose blanks sort last, so it always filesorts the matches.
+ * Pages a dealer asks for. The default page (no filter, best condition first). Then grades, a swing
+ * band and a year, page 2: sorted by an indexed column (the index is read in order and stops at the
+ * page), then by asking price, a nullable figure whose blanks sort last, so it always filesorts the
+ * matches. Last the decision columns: no deal-breakers, a report under a year old, fewest days listed.
  */
 const SCENARIOS: ReadonlyArray<{ name: string; query: Record<string, string> }> = [
+  // What every dealer sees first: no filter, best condition first, page 1.
+  { name: 'default page', query: {} },
   {
     name: 'sorted by swing',
     query: { condition: 'Very good,Good,Fair', swingMin: '300', swingMax: '460', yearMin: '1975', sort: 'swing', dir: 'asc', page: '2', pageSize: '50' },
@@ -68,6 +71,11 @@ const SCENARIOS: ReadonlyArray<{ name: string; query: Record<string, string> }> 
   {
     name: 'sorted by asking price',
     query: { condition: 'Very good,Good,Fair', swingMin: '300', swingMax: '460', yearMin: '1975', sort: 'price', dir: 'asc', page: '2', pageSize: '50' },
+  },
+  {
+    // The decision columns: no deal-breakers, a report inspected within the last year, fewest days listed first.
+    name: 'no deal-breakers, recent report, by days listed',
+    query: { dealBreakers: 'none', reportAgeMax: '365', sort: 'daysListed', dir: 'asc', page: '2', pageSize: '50' },
   },
 ];
 
@@ -89,7 +97,7 @@ const processesModule: string = './lib/processes.mjs';
 const { bringUp, buildApp, startApp, root, NEXT_DIST_DIR } = (await import(stackModule)) as StackHelpers;
 const { run, waitForHttp } = (await import(processesModule)) as ProcessHelpers;
 const { db, closeDatabase } = await import('../db/client');
-const { buildComparisonQueries, loadDetailVisibility } = await import('../db/queries/comparison');
+const { buildComparisonQueries, loadComparisonViewer } = await import('../db/queries/comparison');
 const { comparisonEntries, users } = await import('../db/schema');
 const { comparisonQuerySchema } = await import('../lib/validation/comparison-query');
 const { count, eq } = await import('drizzle-orm');
@@ -178,12 +186,12 @@ async function main() {
     const cookie = await signIn(appUrl);
 
     const [dealer] = await db.select({ id: users.id, role: users.role }).from(users).where(eq(users.email, DEALER.email));
-    const visibility = await loadDetailVisibility(db, dealer!);
+    const viewer = await loadComparisonViewer(db, dealer!);
     const summary: string[] = [];
     for (const scenario of SCENARIOS) {
       // The statements behind this page for this dealer, from the one query builder.
       const query = comparisonQuerySchema.parse(scenario.query);
-      const { page, total } = buildComparisonQueries(db, query, visibility, dealer!.id);
+      const { page, total } = buildComparisonQueries(db, query, viewer);
       const statements = [page.toSQL(), total.toSQL()];
       const explainer = await mysql.createConnection({ uri: BENCH_DATABASE_URL, timezone: 'Z' });
       console.log(`\n── ${scenario.name} ──`);

@@ -1,8 +1,11 @@
 import 'server-only';
-import { and, asc, desc, eq, gte, inArray, isNull, like, lt, lte, or, sql, type AnyColumn, type SQL, type SQLWrapper } from 'drizzle-orm';
-import { comparisonEntries as e, reportAccessGrants, reports, shortlistItems, shortlists } from '@/db/schema';
+import { and, asc, desc, eq, gt, gte, inArray, isNull, like, lt, lte, or, sql, type AnyColumn, type SQL, type SQLWrapper } from 'drizzle-orm';
+import { buyerShopProfiles, comparisonEntries as e, reportAccessGrants, reports, reportSettings, shortlistItems, shortlists } from '@/db/schema';
 import type { Database } from '@/db/client';
-import type { ComparisonPage, ComparisonRow } from '@/lib/comparison/comparison-row';
+import type { ComparisonPage, ComparisonRow, LandedCostPart } from '@/lib/comparison/comparison-row';
+import { landedCostAssumptions } from '@/lib/comparison/landed-cost-basis';
+import { CONVERTER_SIZING_FACTOR, DEMO_CONVERTER_COSTS, VOLTAGE_TOLERANCE, type SupplySpec } from '@/lib/decision/phase-converter';
+import { DEFAULT_VALIDITY_DAYS, reportCurrency } from '@/lib/decision/report-currency';
 import { SUBSYSTEMS } from '@/lib/scoring/subsystems';
 import { SUBSYSTEM_KEYS, type ComparisonFilters, type ComparisonQuery, type SortColumn, type SubsystemKey } from '@/lib/validation/comparison-query';
 
@@ -28,8 +31,54 @@ export async function loadDetailVisibility(reader: Reader, actor: { id: string; 
   return { all: false, inspectionIds: rows.map((r) => r.inspectionId) };
 }
 
+/**
+ * Everything about the reader the table's figures depend on: which reports' details they see, their
+ * shop supply (for the phase converter in the landed cost), how long reports stay current, and now.
+ */
+export type ComparisonViewer = { id: string; visibility: DetailVisibility; shop: SupplySpec | null; validityDays: number; now: Date };
+
+export async function loadComparisonViewer(reader: Reader, actor: { id: string; role: string }, now = new Date()): Promise<ComparisonViewer> {
+  const visibility = await loadDetailVisibility(reader, actor);
+  // One round trip for the two single-row settings.
+  const [row] = await reader
+    .select({
+      validityDays: sql<number | null>`(select ${reportSettings.validityDays} from ${reportSettings} where ${reportSettings.id} = 1)`.mapWith(Number),
+      supplyVoltage: sql<number | null>`(select ${buyerShopProfiles.supplyVoltage} from ${buyerShopProfiles} where ${buyerShopProfiles.userId} = ${actor.id})`,
+      supplyPhases: sql<number | null>`(select ${buyerShopProfiles.supplyPhases} from ${buyerShopProfiles} where ${buyerShopProfiles.userId} = ${actor.id})`,
+    })
+    .from(sql`(select 1) as one`);
+  const phases = row?.supplyPhases === null || row?.supplyPhases === undefined ? null : Number(row.supplyPhases);
+  const shop = row && row.supplyVoltage !== null && (phases === 1 || phases === 3) ? { voltage: Number(row.supplyVoltage), phases: phases as 1 | 3 } : null;
+  return { id: actor.id, visibility, shop, validityDays: row?.validityDays || DEFAULT_VALIDITY_DAYS, now };
+}
+
+/**
+ * The phase converter this reader's shop needs for each machine, in SQL, following assessSupply in
+ * lib/decision/phase-converter.ts: no shop supply or no nameplate → not known (NULL); a three-phase
+ * machine on a single-phase shop → the first converter size covering 1.5 × the motor (NULL when the
+ * motor is not known, beyond the sizes, or priced in another currency); otherwise the machine runs
+ * (0) when the voltages agree within 10 %, and is not known when they differ.
+ */
+function converterExpression(shop: SupplySpec | null): SQL {
+  if (!shop) return sql`null`;
+  const sizes = [...DEMO_CONVERTER_COSTS].sort((a, b) => a.upToKw - b.upToKw);
+  const converterCost = sql`case ${sql.join(
+    sizes.map((size) => sql`when ${e.motorKw} * ${CONVERTER_SIZING_FACTOR} <= ${size.upToKw} then (case when ${e.priceCurrency} = ${size.cost.currency} then ${size.cost.amountMinor} end)`),
+    sql` `,
+  )} end`;
+  // A three-phase shop serves single-phase machines at phase-to-neutral voltage (400 V lines give 230 V).
+  const singlePhaseVoltage = shop.phases === 3 ? Math.round(shop.voltage / Math.sqrt(3)) : shop.voltage;
+  const shopVoltage = sql`(case when ${e.supplyPhases} = 1 then ${singlePhaseVoltage} else ${shop.voltage} end)`;
+  return sql`(case
+    when ${e.supplyPhases} is null then null
+    when ${e.supplyPhases} = 3 and ${shop.phases} = 1 then (case when ${e.motorKw} is null then null else ${converterCost} end)
+    when abs(${e.supplyVoltage} - ${shopVoltage}) <= ${VOLTAGE_TOLERANCE} * greatest(${e.supplyVoltage}, ${shopVoltage}) then 0
+  end)`;
+}
+
 /** The report figures a reader sees: the figure itself with details, NULL without. */
-function detailExpressions(visibility: DetailVisibility) {
+function detailExpressions(viewer: ComparisonViewer) {
+  const { visibility } = viewer;
   const visible = visibility.all
     ? sql`1`
     : visibility.inspectionIds.length === 0
@@ -38,12 +87,21 @@ function detailExpressions(visibility: DetailVisibility) {
           visibility.inspectionIds.map((id) => sql`${id}`),
           sql`, `,
         )})`;
-  const shown = (column: AnyColumn) => (visibility.all ? sql`${column}` : sql`case when ${visible} then ${column} end`);
+  const shown = (column: AnyColumn | SQL) => (visibility.all ? sql`${column}` : sql`case when ${visible} then ${column} end`);
   const value = shown(e.fairMarketValueMinor);
+  const converter = converterExpression(viewer.shop);
+  // Without a shop supply the converter is not known and the landed cost is the stored figure itself.
+  const landed = viewer.shop ? shown(sql`(${e.landedBaseMinor} + coalesce(${converter}, 0))`) : shown(e.landedBaseMinor);
   return {
     visible: sql`${visible}`.mapWith(Number),
     value: value.mapWith(Number),
     repair: shown(e.repairEstimateMinor).mapWith(Number),
+    landed: landed.mapWith(Number),
+    converter: (viewer.shop ? shown(converter) : sql`null`).mapWith(Number),
+    rigging: shown(e.riggingMinor).mapWith(Number),
+    missingTooling: shown(e.missingToolingMinor).mapWith(Number),
+    inclusions: shown(e.inclusionsValueMinor).mapWith(Number),
+    dealBreakers: shown(e.dealBreakers),
     // Only like for like: a price in another currency than the value gives no ratio.
     ratio: sql`case when ${e.priceCurrency} = ${e.valueCurrency} then round(${e.askingPriceMinor} / nullif(${value}, 0), 3) end`.mapWith(Number),
   };
@@ -65,6 +123,12 @@ const SUBSYSTEM_COLUMNS: Record<SubsystemKey, { score: AnyColumn; grade: AnyColu
 type Direction = typeof asc;
 type NullsLast = (expression: SQLWrapper) => SQL[];
 
+/**
+ * Columns whose figure grows as the stored value falls: days listed and report age are counted back
+ * from now, so "fewest days first" reads the listing date (and the report id after it) newest first.
+ */
+const COUNTED_BACK: ReadonlySet<SortColumn> = new Set(['daysListed', 'reportAge']);
+
 /** ORDER BY for every sortable column: the allow-list's other half. */
 const SORTS: Record<SortColumn, (direction: Direction, nullsLast: NullsLast, details: Details) => SQL[]> = {
   machine: (d) => [d(e.maker), d(e.model)],
@@ -83,13 +147,25 @@ const SORTS: Record<SortColumn, (direction: Direction, nullsLast: NullsLast, det
   value: (_d, n, details) => n(details.value),
   ratio: (_d, n, details) => n(details.ratio),
   repair: (_d, n, details) => n(details.repair),
+  landed: (_d, n, details) => n(details.landed),
+  inclusions: (_d, n, details) => n(details.inclusions),
+  dealBreakers: (d) => [d(e.dealBreakerCount)],
+  // Given the flipped direction by orderFor: ascending days is descending dates.
+  daysListed: (d) => [d(e.listedAt)],
+  reportAge: (d) => [d(e.inspectedOn)],
   released: (d) => [d(e.releasedAt)],
 };
+
+const DAY_MS = 86_400_000;
+/** Midnight UTC of the day `days` whole days before `now`'s day. */
+const dayStartBefore = (now: Date, days: number) => new Date((Math.floor(now.getTime() / DAY_MS) - days) * DAY_MS);
+const isoDate = (d: Date) => d.toISOString().slice(0, 10);
 
 const EURO = 100;
 
 /** WHERE for a validated filter; every value is a bound parameter. */
-function whereFor(filters: ComparisonFilters, details: Details, readerId: string): SQL | undefined {
+function whereFor(filters: ComparisonFilters, details: Details, viewer: ComparisonViewer): SQL | undefined {
+  const readerId = viewer.id;
   const conditions: Array<SQL | undefined> = [];
   const range = (expression: SQLWrapper, low: number | undefined, high: number | undefined, scale = 1) => {
     if (low !== undefined) conditions.push(gte(expression, low * scale));
@@ -115,6 +191,16 @@ function whereFor(filters: ComparisonFilters, details: Details, readerId: string
   range(details.value, filters.valueMin, filters.valueMax, EURO);
   range(details.ratio, filters.ratioMin, filters.ratioMax);
   range(details.repair, filters.repairMin, filters.repairMax, EURO);
+  range(details.landed, filters.landedMin, filters.landedMax, EURO);
+  range(details.inclusions, filters.inclusionsMin, filters.inclusionsMax, EURO);
+  if (filters.dealBreakers === 'none') conditions.push(eq(e.dealBreakerCount, 0));
+  if (filters.dealBreakers === 'any') conditions.push(gt(e.dealBreakerCount, 0));
+  // Days counted in whole UTC days as on the report page: "at least n days" is listed before the start
+  // of the day n − 1 days ago; "at most n days" is listed on or after the start of the day n days ago.
+  if (filters.daysListedMin !== undefined) conditions.push(lt(e.listedAt, dayStartBefore(viewer.now, filters.daysListedMin - 1)));
+  if (filters.daysListedMax !== undefined) conditions.push(gte(e.listedAt, dayStartBefore(viewer.now, filters.daysListedMax)));
+  if (filters.reportAgeMin !== undefined) conditions.push(lte(e.inspectedOn, isoDate(dayStartBefore(viewer.now, filters.reportAgeMin))));
+  if (filters.reportAgeMax !== undefined) conditions.push(gte(e.inspectedOn, isoDate(dayStartBefore(viewer.now, filters.reportAgeMax))));
   if (filters.releasedFrom) conditions.push(gte(e.releasedAt, new Date(`${filters.releasedFrom}T00:00:00Z`)));
   if (filters.releasedTo) conditions.push(lt(e.releasedAt, new Date(Date.parse(`${filters.releasedTo}T00:00:00Z`) + 86_400_000)));
   if (filters.shortlist !== undefined) {
@@ -127,7 +213,8 @@ function whereFor(filters: ComparisonFilters, details: Details, readerId: string
 }
 
 function orderFor(query: Pick<ComparisonQuery, 'sort' | 'dir'>, details: Details): SQL[] {
-  const direction = query.dir === 'asc' ? asc : desc;
+  const ascending = (query.dir === 'asc') !== COUNTED_BACK.has(query.sort);
+  const direction = ascending ? asc : desc;
   // Nullable figures sort their blanks last in either direction, so hidden values never lead.
   const nullsLast: NullsLast = (expression) => [sql`${expression} is null`, direction(expression)];
   return [...SORTS[query.sort](direction, nullsLast, details), direction(e.reportId)];
@@ -156,14 +243,23 @@ function rowColumns(details: Details) {
     repairEstimateMinor: details.repair,
     valueCurrency: e.valueCurrency,
     releasedAt: e.releasedAt,
+    landedCostMinor: details.landed,
+    riggingMinor: details.rigging,
+    converterMinor: details.converter,
+    missingToolingMinor: details.missingTooling,
+    inclusionsValueMinor: details.inclusions,
+    dealBreakerCount: e.dealBreakerCount,
+    dealBreakers: details.dealBreakers,
+    listedAt: e.listedAt,
+    inspectedOn: e.inspectedOn,
     ...Object.fromEntries(Object.entries(SUBSYSTEM_COLUMNS).flatMap(([key, c]) => [[`${key}Score`, c.score], [`${key}Grade`, c.grade]])),
   };
 }
 
 /** The page query and the count query, unexecuted: the API runs them; the benchmark also runs their SQL bare. */
-export function buildComparisonQueries(reader: Reader, query: ComparisonQuery, visibility: DetailVisibility, readerId: string) {
-  const details = detailExpressions(visibility);
-  const where = whereFor(query, details, readerId);
+export function buildComparisonQueries(reader: Reader, query: ComparisonQuery, viewer: ComparisonViewer) {
+  const details = detailExpressions(viewer);
+  const where = whereFor(query, details, viewer);
   const page = reader
     .select(rowColumns(details))
     .from(e)
@@ -175,11 +271,28 @@ export function buildComparisonQueries(reader: Reader, query: ComparisonQuery, v
   return { page, total };
 }
 
-function toRow(raw: Record<string, unknown>): ComparisonRow {
+const nullableNumber = (value: unknown) => (value === null || value === undefined ? null : Number(value));
+
+function toRow(raw: Record<string, unknown>, viewer: ComparisonViewer): ComparisonRow {
   const subsystems = Object.fromEntries(
     Object.keys(SUBSYSTEM_COLUMNS).map((key) => [key, { score: raw[`${key}Score`] ?? null, grade: raw[`${key}Grade`] ?? null }]),
   ) as ComparisonRow['subsystems'];
   const released = raw.releasedAt as Date | null;
+  const hasDetails = Boolean(raw.hasDetails);
+  const priceCurrency = raw.priceCurrency as string;
+  const repairsKnown = raw.repairEstimateMinor !== null && raw.valueCurrency === priceCurrency;
+  const notKnown: LandedCostPart[] = hasDetails
+    ? [
+        ...(raw.askingPriceMinor === null ? (['asking price'] as const) : []),
+        ...(raw.riggingMinor === null ? (['rigging'] as const) : []),
+        ...(raw.converterMinor === null ? (['phase converter'] as const) : []),
+        ...(raw.missingToolingMinor === null ? (['missing tooling'] as const) : []),
+        ...(repairsKnown ? [] : (['repairs'] as const)),
+      ]
+    : [];
+  const inspectedOn = new Date(`${String(raw.inspectedOn).slice(0, 10)}T00:00:00Z`);
+  const currency = reportCurrency(inspectedOn, viewer.now, viewer.validityDays);
+  const listedAt = raw.listedAt as Date;
   return {
     reportId: raw.reportId as number,
     machineId: raw.machineId as number,
@@ -196,37 +309,47 @@ function toRow(raw: Record<string, unknown>): ComparisonRow {
     confidence: Number(raw.confidence),
     askingPriceMinor: raw.askingPriceMinor as number | null,
     priceCurrency: raw.priceCurrency as string,
-    hasDetails: Boolean(raw.hasDetails),
+    hasDetails,
     fairMarketValueMinor: raw.fairMarketValueMinor as number | null,
     priceToValue: raw.priceToValue as number | null,
     repairEstimateMinor: raw.repairEstimateMinor as number | null,
     valueCurrency: raw.valueCurrency as string,
     releasedAt: (released ?? new Date(0)).toISOString(),
+    landedCostMinor: nullableNumber(raw.landedCostMinor),
+    landedCostNotKnown: notKnown,
+    inclusionsValueMinor: nullableNumber(raw.inclusionsValueMinor),
+    dealBreakerCount: Number(raw.dealBreakerCount),
+    dealBreakers: typeof raw.dealBreakers === 'string' && raw.dealBreakers !== '' ? raw.dealBreakers.split(',') : [],
+    daysListed: Math.max(0, Math.floor(viewer.now.getTime() / DAY_MS) - Math.floor(listedAt.getTime() / DAY_MS)),
+    inspectedOn: currency.inspectedOn,
+    reportAgeDays: currency.ageDays,
+    validUntil: currency.validUntil,
+    stale: currency.stale,
     subsystems,
   };
 }
 
 /** One page of the table with the number of machines matching the filter. */
-export async function listComparisonRows(reader: Reader, query: ComparisonQuery, visibility: DetailVisibility, readerId: string): Promise<ComparisonPage> {
-  const { page, total } = buildComparisonQueries(reader, query, visibility, readerId);
+export async function listComparisonRows(reader: Reader, query: ComparisonQuery, viewer: ComparisonViewer): Promise<ComparisonPage> {
+  const { page, total } = buildComparisonQueries(reader, query, viewer);
   const rows = await page;
   const [count] = await total;
-  return { rows: rows.map((row) => toRow(row)), total: count?.n ?? 0, page: query.page, pageSize: query.pageSize };
+  return { rows: rows.map((row) => toRow(row, viewer)), total: count?.n ?? 0, page: query.page, pageSize: query.pageSize, landedCostBasis: landedCostAssumptions(viewer.shop) };
 }
 
 /** Exports refuse filters wider than this rather than build a file no spreadsheet opens comfortably. */
 export const MAX_EXPORT_ROWS = 20_000;
 
 /** Every machine matching the filter in the table's order, up to MAX_EXPORT_ROWS plus one (to tell that it was cut). */
-export async function listComparisonRowsForExport(reader: Reader, query: ComparisonQuery, visibility: DetailVisibility, readerId: string): Promise<ComparisonRow[]> {
-  const details = detailExpressions(visibility);
+export async function listComparisonRowsForExport(reader: Reader, query: ComparisonQuery, viewer: ComparisonViewer): Promise<ComparisonRow[]> {
+  const details = detailExpressions(viewer);
   const rows = await reader
     .select(rowColumns(details))
     .from(e)
-    .where(whereFor(query, details, readerId))
+    .where(whereFor(query, details, viewer))
     .orderBy(...orderFor(query, details))
     .limit(MAX_EXPORT_ROWS + 1);
-  return rows.map((row) => toRow(row));
+  return rows.map((row) => toRow(row, viewer));
 }
 
 /** Regions that have inspected machines, for the location filter's choices. */

@@ -26,6 +26,16 @@ const row = (overrides: Partial<ComparisonRow> = {}): ComparisonRow => ({
   repairEstimateMinor: 123_450,
   valueCurrency: 'EUR',
   releasedAt: '2026-03-04T16:00:00.000Z',
+  landedCostMinor: 863_950,
+  landedCostNotKnown: ['phase converter'],
+  inclusionsValueMinor: 43_000,
+  dealBreakerCount: 2,
+  dealBreakers: ['crackedCasting', 'brokenGearTeeth'],
+  daysListed: 41,
+  inspectedOn: '2026-02-20',
+  reportAgeDays: 120,
+  validUntil: '2026-05-21',
+  stale: true,
   subsystems: { bed: grade, spindle: grade, gearbox: grade, slides: grade, tailstock: grade, drive: grade, electrical: grade, accessories: { score: null, grade: null } },
   ...overrides,
 });
@@ -48,9 +58,35 @@ describe('comparisonCsv', () => {
     });
   });
 
+  it('writes the decision columns: landed cost with its unknown parts, deal-breakers in words, days and report currency', () => {
+    const [line] = parse(comparisonCsv([row()]));
+    expect(line).toMatchObject({
+      'Landed cost (at least)': '8639.50',
+      'Landed cost parts not known': 'phase converter',
+      'Inclusions value': '430.00',
+      'Deal-breakers (count)': '2',
+      'Deal-breakers': 'Cracked casting (bed, headstock, apron or gearbox); Broken gear teeth',
+      'Days listed': '41',
+      'Report age (days)': '120',
+      'Report current until (UTC)': '2026-05-21',
+      'Report stale': 'stale',
+    });
+  });
+
   it('leaves the report’s figures blank for a report not bought', () => {
-    const [line] = parse(comparisonCsv([row({ hasDetails: false, fairMarketValueMinor: null, priceToValue: null, repairEstimateMinor: null })]));
-    expect([line!['Fair market value'], line!['Price / value'], line!['Repair estimate'], line!.Details]).toEqual(['', '', '', 'summary only']);
+    const [line] = parse(
+      comparisonCsv([row({ hasDetails: false, fairMarketValueMinor: null, priceToValue: null, repairEstimateMinor: null, landedCostMinor: null, landedCostNotKnown: [], inclusionsValueMinor: null, dealBreakers: [] })]),
+    );
+    expect([line!['Fair market value'], line!['Price / value'], line!['Repair estimate'], line!['Landed cost (at least)'], line!['Inclusions value'], line!['Deal-breakers'], line!.Details]).toEqual([
+      '',
+      '',
+      '',
+      '',
+      '',
+      '',
+      'summary only',
+    ]);
+    expect(line!['Deal-breakers (count)']).toBe('2');
   });
 
   it('keeps a maker that looks like a spreadsheet formula from running', () => {

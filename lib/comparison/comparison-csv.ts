@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import { LATHE_KIND_LABELS, type ComparisonRow } from './comparison-row';
+import { DEAL_BREAKER_LABELS, LATHE_KIND_LABELS, type ComparisonRow } from './comparison-row';
 import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '@/lib/scoring/subsystems';
 import { SUBSYSTEM_KEYS } from '@/lib/validation/comparison-query';
 
@@ -31,6 +31,17 @@ const CSV_COLUMNS: ReadonlyArray<[header: string, value: (row: ComparisonRow) =>
   ['Price / value', (r) => (r.priceToValue === null ? '' : r.priceToValue.toFixed(2))],
   ['Repair estimate', (r) => euros(r.repairEstimateMinor)],
   ['Value currency', (r) => r.valueCurrency],
+  // Landed cost and inclusions are in the asking price's currency, as on the report page.
+  ['Landed cost (at least)', (r) => euros(r.landedCostMinor)],
+  ['Landed cost parts not known', (r) => (r.hasDetails ? r.landedCostNotKnown.join('; ') : '')],
+  ['Inclusions value', (r) => euros(r.inclusionsValueMinor)],
+  ['Deal-breakers (count)', (r) => r.dealBreakerCount],
+  ['Deal-breakers', (r) => r.dealBreakers.map((id) => DEAL_BREAKER_LABELS[id] ?? id).join('; ')],
+  ['Days listed', (r) => r.daysListed],
+  ['Inspected on (UTC)', (r) => r.inspectedOn],
+  ['Report age (days)', (r) => r.reportAgeDays],
+  ['Report current until (UTC)', (r) => r.validUntil],
+  ['Report stale', (r) => (r.stale ? 'stale' : 'current')],
   ['Report released (UTC)', (r) => r.releasedAt.slice(0, 10)],
   ['Details', (r) => (r.hasDetails ? 'bought' : 'summary only')],
 ];

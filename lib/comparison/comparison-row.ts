@@ -1,4 +1,5 @@
 import type { ConditionGrade } from '@/lib/scoring/grading/condition-scale';
+import { DEAL_BREAKER_ITEMS } from '@/lib/scoring';
 import type { SubsystemKey } from '@/lib/validation/comparison-query';
 
 /**
@@ -30,10 +31,36 @@ export type ComparisonRow = {
   repairEstimateMinor: number | null;
   valueCurrency: string;
   releasedAt: string;
+  /**
+   * What the machine costs standing in the reader's shop at the table's assumptions
+   * (landed-cost-basis.ts); null without the report, like the report page's own figure.
+   */
+  landedCostMinor: number | null;
+  /** Parts of the landed cost that are not known and so left out (the figure is then "at least"). */
+  landedCostNotKnown: LandedCostPart[];
+  /** Inclusions at their condition's share of replacement cost; null without the report or when none are listed. */
+  inclusionsValueMinor: number | null;
+  /** Deal-breakers the report records: the count for everyone, the ids (in words via DEAL_BREAKER_LABELS) with the report. */
+  dealBreakerCount: number;
+  dealBreakers: string[];
+  /** Whole UTC days since the listing went up. */
+  daysListed: number;
+  /** Day of the inspection, its age in whole UTC days, the last day the report is current and whether it is past it. */
+  inspectedOn: string;
+  reportAgeDays: number;
+  validUntil: string;
+  stale: boolean;
   subsystems: Record<SubsystemKey, { score: number | null; grade: ConditionGrade | null }>;
 };
 
-export type ComparisonPage = { rows: ComparisonRow[]; total: number; page: number; pageSize: number };
+export const LANDED_COST_PARTS = ['asking price', 'rigging', 'phase converter', 'missing tooling', 'repairs'] as const;
+export type LandedCostPart = (typeof LANDED_COST_PARTS)[number];
+
+/** Deal-breakers in words, by the scoring result's id. */
+export const DEAL_BREAKER_LABELS: Readonly<Record<string, string>> = Object.fromEntries(DEAL_BREAKER_ITEMS.map((item) => [item.id, item.label]));
+
+/** `landedCostBasis`: what this reader's landed-cost figures assume, in words (landed-cost-basis.ts). */
+export type ComparisonPage = { rows: ComparisonRow[]; total: number; page: number; pageSize: number; landedCostBasis: string };
 
 export const LATHE_KIND_LABELS: Record<ComparisonRow['kind'], string> = {
   general_purpose: 'General purpose',

@@ -1,5 +1,5 @@
 import 'server-only';
-import { listComparisonRowsForExport, loadDetailVisibility, MAX_EXPORT_ROWS } from '@/db/queries/comparison';
+import { listComparisonRowsForExport, loadComparisonViewer, MAX_EXPORT_ROWS } from '@/db/queries/comparison';
 import { defineOperation } from '@/lib/auth/operation';
 import { AppError } from '@/lib/errors';
 import { comparisonQuerySchema } from '@/lib/validation/comparison-query';
@@ -14,8 +14,8 @@ export const exportComparison = defineOperation({
   auditSuccess: false,
   readOnly: true,
   async run({ actor, input, tx }) {
-    const visibility = await loadDetailVisibility(tx, actor!);
-    const rows = await listComparisonRowsForExport(tx, input, visibility, actor!.id);
+    const viewer = await loadComparisonViewer(tx, actor!);
+    const rows = await listComparisonRowsForExport(tx, input, viewer);
     if (rows.length > MAX_EXPORT_ROWS) {
       const message = `More than ${MAX_EXPORT_ROWS.toLocaleString('en-GB')} machines match this filter. Narrow it before exporting.`;
       throw new AppError('invalid_input', message, { _: [message] });

@@ -1,5 +1,5 @@
 import 'server-only';
-import { listComparisonRows, loadDetailVisibility } from '@/db/queries/comparison';
+import { listComparisonRows, loadComparisonViewer } from '@/db/queries/comparison';
 import { defineOperation } from '@/lib/auth/operation';
 import { comparisonQuerySchema } from '@/lib/validation/comparison-query';
 
@@ -12,7 +12,7 @@ export const listComparisonPage = defineOperation({
   auditSuccess: false,
   readOnly: true,
   async run({ actor, input, tx }) {
-    const visibility = await loadDetailVisibility(tx, actor!);
-    return { data: await listComparisonRows(tx, input, visibility, actor!.id) };
+    const viewer = await loadComparisonViewer(tx, actor!);
+    return { data: await listComparisonRows(tx, input, viewer) };
   },
 });

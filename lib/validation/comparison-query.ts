@@ -37,9 +37,16 @@ export const SORT_COLUMNS = [
   'value',
   'ratio',
   'repair',
+  'landed',
+  'inclusions',
+  'dealBreakers',
+  'daysListed',
+  'reportAge',
   'released',
 ] as const;
 export type SortColumn = (typeof SORT_COLUMNS)[number];
+
+export const DEAL_BREAKER_FILTERS = ['none', 'any'] as const;
 
 export const PAGE_SIZES = [25, 50, 100] as const;
 export const DEFAULT_SORT: { sort: SortColumn; dir: 'asc' | 'desc' } = { sort: 'condition', dir: 'desc' };
@@ -102,6 +109,10 @@ const RANGE_PAIRS = [
   ['valueMin', 'valueMax'],
   ['ratioMin', 'ratioMax'],
   ['repairMin', 'repairMax'],
+  ['landedMin', 'landedMax'],
+  ['inclusionsMin', 'inclusionsMax'],
+  ['daysListedMin', 'daysListedMax'],
+  ['reportAgeMin', 'reportAgeMax'],
   ['releasedFrom', 'releasedTo'],
 ] as const;
 
@@ -129,6 +140,17 @@ export const comparisonFiltersShape = {
   ratioMax: decimal(0, 100, 'the price ÷ value ratio'),
   repairMin: whole(0, 100_000_000, '€'),
   repairMax: whole(0, 100_000_000, '€'),
+  landedMin: whole(0, 100_000_000, '€'),
+  landedMax: whole(0, 100_000_000, '€'),
+  inclusionsMin: whole(0, 100_000_000, '€'),
+  inclusionsMax: whole(0, 100_000_000, '€'),
+  /** "none": no deal-breaker recorded; "any": at least one. */
+  dealBreakers: z.preprocess(emptyToUndefined, z.enum(DEAL_BREAKER_FILTERS, { error: `Deal-breakers are ${DEAL_BREAKER_FILTERS.join(' or ')}` }).optional()),
+  // Whole UTC days, as the report page counts them.
+  daysListedMin: whole(0, 36_500, 'days'),
+  daysListedMax: whole(0, 36_500, 'days'),
+  reportAgeMin: whole(0, 36_500, 'days'),
+  reportAgeMax: whole(0, 36_500, 'days'),
   releasedFrom: isoDay,
   releasedTo: isoDay,
   shortlist: z.preprocess(emptyToUndefined, z.coerce.number().int().positive('Not a shortlist').optional()),

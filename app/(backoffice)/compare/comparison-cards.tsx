@@ -6,6 +6,7 @@ import type { ComparisonRow } from '@/lib/comparison/comparison-row';
 import { formatMm, formatMoney } from '@/lib/format';
 import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '@/lib/scoring/subsystems';
 import { SUBSYSTEM_KEYS } from '@/lib/validation/comparison-query';
+import { DealBreakersCell, LandedCostCell, ReportAgeCell } from './decision-cells';
 import { PriceValueGauge } from './price-value-gauge';
 
 /** The same rows as cards on a phone, where twenty columns cannot be read side by side. */
@@ -53,6 +54,9 @@ export function ComparisonCards({
               <GradeChip grade={r.overallCondition} score={r.overallScore} />
               <span className="figures text-sm text-ink-soft">{Math.round(r.confidence * 100)} % measured</span>
             </div>
+            <div className="mt-2">
+              <DealBreakersCell row={r} />
+            </div>
             <dl className="figures mt-2 grid grid-cols-2 gap-x-3 gap-y-1 text-sm">
               <dt className="text-ink-soft">Asking</dt>
               <dd className="text-right font-medium">{formatMoney(r.askingPriceMinor, r.priceCurrency)}</dd>
@@ -64,8 +68,18 @@ export function ComparisonCards({
                   <dd className="text-right">
                     <PriceValueGauge ratio={r.priceToValue} />
                   </dd>
+                  <dt className="text-ink-soft">Landed cost</dt>
+                  <dd className="text-right">
+                    <LandedCostCell row={r} />
+                  </dd>
                 </>
               ) : null}
+              <dt className="text-ink-soft">Listed</dt>
+              <dd className="text-right">{r.daysListed.toLocaleString('en-GB')} days</dd>
+              <dt className="text-ink-soft">Report age</dt>
+              <dd className="flex justify-end text-right">
+                <ReportAgeCell row={r} />
+              </dd>
             </dl>
             <details className="mt-2">
               <summary className="min-h-touch cursor-pointer content-center text-sm font-medium text-ink-soft">Subsystem grades</summary>

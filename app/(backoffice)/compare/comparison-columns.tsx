@@ -7,6 +7,7 @@ import { LATHE_KIND_LABELS, type ComparisonRow } from '@/lib/comparison/comparis
 import { formatDate, formatMm, formatMoney } from '@/lib/format';
 import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '@/lib/scoring/subsystems';
 import { SUBSYSTEM_KEYS, type SortColumn } from '@/lib/validation/comparison-query';
+import { DealBreakersCell, LandedCostCell, ReportAgeCell } from './decision-cells';
 import { PriceValueGauge } from './price-value-gauge';
 
 export type ColumnMeta = { className?: string; group: 'machine' | 'grades' | 'money'; label: string };
@@ -83,6 +84,12 @@ export const COMPARISON_COLUMNS: ColumnDef<ComparisonRow, unknown>[] = [
       cell: ({ row }) => <GradeChip grade={row.original.subsystems[key].grade} score={row.original.subsystems[key].score} />,
     };
   }),
+  {
+    id: 'dealBreakers',
+    header: 'Deal-breakers',
+    meta: { group: 'grades', label: 'Deal-breakers' },
+    cell: ({ row }) => <DealBreakersCell row={row.original} />,
+  },
   { id: 'confidence', header: 'Confidence', meta: { group: 'grades', label: 'Confidence', className: NUMBER }, cell: ({ row }) => `${Math.round(row.original.confidence * 100)} %` },
   { id: 'price', header: 'Asking', meta: { group: 'money', label: 'Asking price', className: NUMBER }, cell: ({ row }) => formatMoney(row.original.askingPriceMinor, row.original.priceCurrency) },
   {
@@ -103,6 +110,21 @@ export const COMPARISON_COLUMNS: ColumnDef<ComparisonRow, unknown>[] = [
     meta: { group: 'money', label: 'Repair estimate', className: NUMBER },
     cell: ({ row: { original: r } }) => (r.hasDetails ? formatMoney(r.repairEstimateMinor, r.valueCurrency) : <WithReport />),
   },
+  {
+    id: 'landed',
+    header: 'Landed',
+    meta: { group: 'money', label: 'Landed cost in your shop', className: NUMBER },
+    cell: ({ row: { original: r } }) => (r.hasDetails ? <LandedCostCell row={r} /> : <WithReport />),
+  },
+  {
+    id: 'inclusions',
+    header: 'Inclusions',
+    meta: { group: 'money', label: 'Inclusions value', className: NUMBER },
+    cell: ({ row: { original: r } }) =>
+      r.hasDetails ? r.inclusionsValueMinor === null ? <span className="text-sm text-ink-soft">not listed</span> : formatMoney(r.inclusionsValueMinor, r.priceCurrency) : <WithReport />,
+  },
+  { id: 'daysListed', header: 'Listed', meta: { group: 'machine', label: 'Days listed', className: NUMBER }, cell: ({ row }) => `${row.original.daysListed.toLocaleString('en-GB')} days` },
+  { id: 'reportAge', header: 'Report age', meta: { group: 'machine', label: 'Report age (since inspection)', className: 'figures text-right' }, cell: ({ row }) => <ReportAgeCell row={row.original} /> },
   { id: 'released', header: 'Report', meta: { group: 'machine', label: 'Report date', className: 'figures whitespace-nowrap' }, cell: ({ row }) => formatDate(new Date(row.original.releasedAt)) },
 ];
 

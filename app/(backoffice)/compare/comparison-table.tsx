@@ -20,7 +20,9 @@ export function ComparisonTable({
   columnVisibility,
   selected,
   onToggle,
+  landedCostBasis,
 }: {
+  landedCostBasis: string;
   rows: ComparisonRow[];
   loading: boolean;
   refreshing: boolean;
@@ -69,10 +71,15 @@ export function ComparisonTable({
                     <button
                       type="button"
                       onClick={() => onSort(id)}
-                      title={`Sort by ${meta.label.toLowerCase()}`}
+                      title={id === 'landed' && landedCostBasis ? `Sort by landed cost. ${landedCostBasis}` : `Sort by ${meta.label.toLowerCase()}`}
                       className={`inline-flex min-h-touch items-center gap-1 whitespace-nowrap hover:text-ink ${active ? 'text-ink' : ''}`}
                     >
                       {flexRender(header.column.columnDef.header, header.getContext())}
+                      {id === 'landed' ? (
+                        <sup aria-hidden="true" className="text-copper">
+                          *
+                        </sup>
+                      ) : null}
                       <span aria-hidden="true" className={active ? 'text-copper' : 'text-ink-faint'}>
                         {active ? (dir === 'asc' ? '▲' : '▼') : '↕'}
                       </span>

@@ -20,6 +20,10 @@ import { useComparisonUrl } from './use-comparison-url';
 const PHONE_SORTS: ReadonlyArray<[string, string]> = [
   ['condition:desc', 'Best condition first'],
   ['ratio:asc', 'Lowest price ÷ value first'],
+  ['landed:asc', 'Lowest landed cost first'],
+  ['dealBreakers:asc', 'Fewest deal-breakers first'],
+  ['reportAge:asc', 'Most recent inspection first'],
+  ['daysListed:asc', 'Newest listing first'],
   ['price:asc', 'Lowest asking price first'],
   ['price:desc', 'Highest asking price first'],
   ['swing:asc', 'Smallest swing first'],
@@ -28,7 +32,7 @@ const PHONE_SORTS: ReadonlyArray<[string, string]> = [
   ['released:desc', 'Newest report first'],
 ];
 // Numbers first: ids whose first click sorts high to low (best grade, newest report, highest value).
-const DESCENDING_FIRST = new Set(['condition', 'confidence', 'released', 'year', 'value']);
+const DESCENDING_FIRST = new Set(['condition', 'confidence', 'released', 'year', 'value', 'inclusions']);
 
 export function ComparisonWorkspace({ regions, shortlists }: { regions: string[]; shortlists: ShortlistSummary[] }) {
   const { params, queryString, update, clear } = useComparisonUrl();
@@ -141,6 +145,7 @@ export function ComparisonWorkspace({ regions, shortlists }: { regions: string[]
                 columnVisibility={visibility}
                 selected={selected}
                 onToggle={toggle}
+                landedCostBasis={query.data?.landedCostBasis ?? ''}
               />
             </div>
             <div className="md:hidden">
@@ -203,8 +208,18 @@ export function ComparisonWorkspace({ regions, shortlists }: { regions: string[]
             </label>
           </nav>
         ) : null}
+        {query.data?.landedCostBasis ? (
+          <p className="text-sm text-ink-soft" data-landed-cost-basis>
+            <span aria-hidden="true" className="text-copper">
+              *{' '}
+            </span>
+            <span className="font-medium text-ink">Landed cost:</span> {query.data.landedCostBasis}
+          </p>
+        ) : null}
         <p className="text-sm text-ink-soft">
-          Summary grades show for every released report. Value, price ÷ value, repairs and the checks come with the reports you buy —{' '}
+          Report age counts days since the inspection; a report past its current period is marked stale. Summary grades and the number of
+          deal-breakers show for every released report. Value, price ÷ value, repairs, landed cost, inclusions, the deal-breakers by name and
+          the checks come with the reports you buy —{' '}
           <Link href="/reports" className="font-medium text-copper hover:underline">
             see reports
           </Link>

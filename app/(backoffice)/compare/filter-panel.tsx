@@ -18,6 +18,10 @@ const RANGES: ReadonlyArray<{ label: string; from: string; to: string; unit: str
   { label: 'Fair market value', from: 'valueMin', to: 'valueMax', unit: '€' },
   { label: 'Price ÷ value', from: 'ratioMin', to: 'ratioMax', unit: '×', step: '0.01' },
   { label: 'Repair estimate', from: 'repairMin', to: 'repairMax', unit: '€' },
+  { label: 'Landed cost', from: 'landedMin', to: 'landedMax', unit: '€' },
+  { label: 'Inclusions value', from: 'inclusionsMin', to: 'inclusionsMax', unit: '€' },
+  { label: 'Days listed', from: 'daysListedMin', to: 'daysListedMax', unit: 'days' },
+  { label: 'Report age', from: 'reportAgeMin', to: 'reportAgeMax', unit: 'days since inspection' },
   { label: 'Report released', from: 'releasedFrom', to: 'releasedTo', unit: '', type: 'date' },
 ];
 export const TYPED_FILTER_KEYS = ['q', ...RANGES.flatMap((r) => [r.from, r.to])];
@@ -51,6 +55,13 @@ function CheckboxGroup({
     </fieldset>
   );
 }
+
+/** The has-deal-breakers toggle: [URL value, words]; '' leaves it off. */
+const DEAL_BREAKER_CHOICES: ReadonlyArray<[string, string]> = [
+  ['', 'Either'],
+  ['none', 'None recorded'],
+  ['any', 'At least one'],
+];
 
 const GRADE_OPTIONS = CONDITION_GRADES.map((g) => ({ value: g, label: g, gauge: true }));
 
@@ -110,12 +121,35 @@ export function FilterPanel({
           ))}
         </div>
         <p id={`${id}-hint`} className="text-xs text-ink-soft">
-          Value, price ÷ value and repairs filter the reports you have bought.
+          Value, price ÷ value, repairs, landed cost and inclusions filter the reports you have bought.
         </p>
         <button type="submit" className="inline-flex min-h-touch w-full items-center justify-center rounded-lg border border-copper bg-copper px-4 font-medium text-white hover:bg-copper-dark">
           Apply filters
         </button>
       </form>
+
+      <fieldset>
+        <legend className="mb-1 text-sm font-semibold">Deal-breakers</legend>
+        <div className="flex flex-wrap gap-1.5">
+          {DEAL_BREAKER_CHOICES.map(([value, label]) => (
+            <label key={label} className={`${chip} border-line-strong bg-paper-raised`}>
+              <input
+                type="radio"
+                name={`${id}-deal-breakers`}
+                className="h-4 w-4 accent-copper"
+                checked={(params.dealBreakers ?? '') === value}
+                onChange={() => onChange({ dealBreakers: value || null })}
+              />
+              {label}
+            </label>
+          ))}
+        </div>
+        {(fieldErrors.dealBreakers ?? []).map((message) => (
+          <p key={message} className="mt-1 text-sm text-band-rebuild">
+            {message}
+          </p>
+        ))}
+      </fieldset>
 
       <CheckboxGroup legend="Overall condition" options={GRADE_OPTIONS} value={params.condition} onToggle={toggle('condition')} />
       <CheckboxGroup legend="Type" options={Object.entries(LATHE_KIND_LABELS).map(([value, label]) => ({ value, label }))} value={params.kind} onToggle={toggle('kind')} />

@@ -5,11 +5,14 @@ import { BandBadge } from '@/components/ui/band-badge';
 import { Card } from '@/components/ui/card';
 import { GradeChip } from '@/components/ui/grade-chip';
 import { db } from '@/db/client';
-import { loadDetailVisibility } from '@/db/queries/comparison';
+import { loadComparisonViewer } from '@/db/queries/comparison';
 import { loadComparableSalesByIds, loadComparisonEntries, loadReportResults, type ComparisonEntry } from '@/db/queries/side-by-side';
 import { requirePagePermission } from '@/lib/auth/session';
 import { comparablesUsed } from '@/lib/comparison/comparables-used';
-import { LATHE_KIND_LABELS } from '@/lib/comparison/comparison-row';
+import { DEAL_BREAKER_LABELS, LATHE_KIND_LABELS } from '@/lib/comparison/comparison-row';
+import { converterMinorFor, landedCostAssumptions } from '@/lib/comparison/landed-cost-basis';
+import { daysOnMarket, reportCurrency } from '@/lib/decision/report-currency';
+import type { SupplySpec } from '@/lib/decision/phase-converter';
 import { differingChecks } from '@/lib/comparison/differing-checks';
 import { formatDate, formatMm, formatMoney } from '@/lib/format';
 import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '@/lib/scoring/subsystems';
@@ -20,8 +23,45 @@ export const metadata: Metadata = { title: 'Side by side' };
 
 const LETTERS = ['A', 'B', 'C', 'D'];
 
+type Reading = { details: boolean; shop: SupplySpec | null; validityDays: number; now: Date };
+
+/** Landed cost at the table's assumptions: the stored figure plus this reader's converter, where known. */
+function landedCost(e: ComparisonEntry, shop: SupplySpec | null) {
+  const converter = converterMinorFor(e, shop);
+  const partial = e.askingPriceMinor === null || e.riggingMinor === null || e.missingToolingMinor === null || converter === null || e.repairEstimateMinor === null || e.valueCurrency !== e.priceCurrency;
+  return `${partial ? 'at least ' : ''}${formatMoney(e.landedBaseMinor + (converter ?? 0), e.priceCurrency)}`;
+}
+
+function DealBreakers({ e, details }: { e: ComparisonEntry; details: boolean }) {
+  if (e.dealBreakerCount === 0) return <span>✓ None recorded</span>;
+  return (
+    <span className="flex flex-col">
+      <span className="font-semibold text-band-rebuild">
+        <span aria-hidden="true">✕ </span>
+        {e.dealBreakerCount} deal-breaker{e.dealBreakerCount === 1 ? '' : 's'}
+      </span>
+      {details ? (
+        <span className="text-sm">{e.dealBreakers.split(',').map((id) => DEAL_BREAKER_LABELS[id] ?? id).join('; ')}</span>
+      ) : (
+        <span className="text-sm text-ink-faint">named in the report</span>
+      )}
+    </span>
+  );
+}
+
+function ReportAge({ e, r }: { e: ComparisonEntry; r: Reading }) {
+  const currency = reportCurrency(new Date(`${e.inspectedOn}T00:00:00Z`), r.now, r.validityDays);
+  const until = formatDate(new Date(`${currency.validUntil}T00:00:00Z`));
+  return (
+    <span className="flex flex-col">
+      {currency.ageDays} days
+      <span className={`text-sm ${currency.stale ? 'font-medium text-band-worn' : 'text-ink-soft'}`}>{currency.stale ? `▲ Stale since ${until}` : `current to ${until}`}</span>
+    </span>
+  );
+}
+
 /** Rows of the key-figures table: label and how to show it for one machine. */
-const FIGURES: ReadonlyArray<[string, (e: ComparisonEntry, details: boolean) => React.ReactNode]> = [
+const FIGURES: ReadonlyArray<[string, (e: ComparisonEntry, details: boolean, reading: Reading) => React.ReactNode]> = [
   ['Type', (e) => LATHE_KIND_LABELS[e.latheKind]],
   ['Swing over bed', (e) => formatMm(e.swingMm)],
   ['Between centres', (e) => formatMm(e.betweenCentresMm)],
@@ -37,6 +77,11 @@ const FIGURES: ReadonlyArray<[string, (e: ComparisonEntry, details: boolean) => 
     (e, d) => (d ? (e.askingPriceMinor !== null && e.fairMarketValueMinor && e.priceCurrency === e.valueCurrency ? `${(e.askingPriceMinor / e.fairMarketValueMinor).toFixed(2)}×` : '—') : <Locked />),
   ],
   ['Repair estimate', (e, d) => (d ? formatMoney(e.repairEstimateMinor, e.valueCurrency) : <Locked />)],
+  ['Landed cost in your shop *', (e, d, r) => (d ? landedCost(e, r.shop) : <Locked />)],
+  ['Inclusions value', (e, d) => (d ? (e.inclusionsValueMinor === null ? 'not listed' : formatMoney(e.inclusionsValueMinor, e.priceCurrency)) : <Locked />)],
+  ['Deal-breakers', (e, d) => <DealBreakers e={e} details={d} />],
+  ['Days listed', (e, _d, r) => `${daysOnMarket(e.listedAt, r.now)} days`],
+  ['Report age', (e, _d, r) => <ReportAge e={e} r={r} />],
   ['Report released', (e) => formatDate(e.releasedAt)],
 ];
 
@@ -63,7 +108,8 @@ export default async function SideBySidePage({ searchParams }: { searchParams: P
   const entries = await loadComparisonEntries(db, parsed.data.reports);
   if (entries.length < 2) return <Problem title="These reports are no longer on offer" text="At least two of the chosen reports have been withdrawn or replaced by a correction. Choose again in the table." />;
 
-  const visibility = await loadDetailVisibility(db, user);
+  const viewer = await loadComparisonViewer(db, user);
+  const { visibility } = viewer;
   const hasDetails = (e: ComparisonEntry) => visibility.all || visibility.inspectionIds.includes(e.inspectionId);
   const results = await loadReportResults(db, entries.filter(hasDetails).map((e) => e.reportId));
   const machines = entries.map((e, i) => ({ entry: e, letter: LETTERS[i]!, details: hasDetails(e), result: results.get(e.reportId) ?? null }));
@@ -111,7 +157,7 @@ export default async function SideBySidePage({ searchParams }: { searchParams: P
                     </th>
                     {machines.map((m) => (
                       <td key={m.letter} className="px-3 py-2">
-                        {show(m.entry, m.details)}
+                        {show(m.entry, m.details, { details: m.details, shop: viewer.shop, validityDays: viewer.validityDays, now: viewer.now })}
                       </td>
                     ))}
                   </tr>
@@ -119,6 +165,7 @@ export default async function SideBySidePage({ searchParams }: { searchParams: P
               </tbody>
             </table>
           </div>
+          <p className="mt-3 text-sm text-ink-soft">* {landedCostAssumptions(viewer.shop)}</p>
         </Card>
 
         <Card title="Subsystem grades">
