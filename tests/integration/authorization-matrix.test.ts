@@ -32,6 +32,7 @@ import type { InspectionStatus } from '@/db/schema/inspections';
 import type { Actor } from '@/lib/auth/operation';
 import { issueToken } from '@/lib/auth/one-time-tokens';
 import { createAccount, TEST_PASSWORD, uniqueEmail, type TestAccount } from '../support/accounts';
+import { createAgedReleasedReport } from '../support/reinspection-fixtures';
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null, ip: '198.51.100.1' }));
 vi.mock('@/lib/auth/current-actor', () => ({
@@ -228,6 +229,12 @@ const RULES: Record<string, Rule> = {
     input: async (c) => ({ inclusionId: await newInclusion(sellerOf(c).id) }),
     others: { allowed: [], input: async (c) => ({ inclusionId: await newInclusion(c.fx.otherSeller.id) }) },
   },
+  'app/(backoffice)/machines/actions.ts#setListingStatusAction': {
+    kind: 'action',
+    allowed: ['seller'],
+    input: async (c) => ({ machineId: await newMachine(sellerOf(c).id), listingStatus: 'withdrawn' }),
+    others: { allowed: [], input: async (c) => ({ machineId: await newMachine(c.fx.otherSeller.id), listingStatus: 'withdrawn' }) },
+  },
   'app/(backoffice)/machines/actions.ts#cancelInspectionAction': {
     kind: 'action',
     allowed: ['seller', 'admin'],
@@ -310,6 +317,14 @@ const RULES: Record<string, Rule> = {
   // Market data feeds every valuation: the coordinator's inputs are refused by validation so no sale is added.
   'app/(backoffice)/admin/market/actions.ts#recordComparableSaleAction': { kind: 'action', allowed: ['admin'], input: () => ({ description: '' }) },
   'app/(backoffice)/admin/market/actions.ts#importComparableSalesAction': { kind: 'action', allowed: ['admin'], input: () => ({ csv: '' }) },
+  // A current report (inspected 5 days ago): allowed callers get past authorisation to the "still current" refusal.
+  'app/(backoffice)/reports/[id]/reinspection-actions.ts#requestReinspectionAction': {
+    kind: 'action',
+    form: true,
+    allowed: ['buyer', 'dealer', 'seller'],
+    input: async (c) => ({ reportId: String((await createAgedReleasedReport({ seller: sellerOf(c), inspectedDaysAgo: 5 })).reportId) }),
+    others: { allowed: ['buyer', 'dealer'], input: async (c) => ({ reportId: String((await createAgedReleasedReport({ seller: c.fx.otherSeller, inspectedDaysAgo: 5 })).reportId) }) },
+  },
   'app/(backoffice)/reports/[id]/actions.ts#buyReportAction': { kind: 'action', form: true, allowed: ['buyer', 'dealer'], input: () => ({ reportId: '999999999' }) },
   'app/api/reports/[id]/pdf/route.ts#GET': {
     kind: 'route',
