@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { fmt, roundTo } from './format-number';
+import { fmt, joinNumbers, plainNumber, roundTo } from './format-number';
 
 describe('number rounding for reports', () => {
   it.each([
@@ -51,5 +51,17 @@ describe('number rounding for reports', () => {
     expect(fmt(0.0125, 3)).toBe('0.013');
     expect(fmt(-12.5, 0)).toBe('-12');
     expect(fmt(1.0000001, 4)).toBe('1');
+  });
+
+  // Reference: ECMAScript Number::toString and Array.prototype.join, which these stand in for.
+  it('writes readings exactly as String() and join do', () => {
+    fc.assert(
+      fc.property(fc.array(fc.oneof(fc.double(), fc.integer({ min: -4000, max: 4000 }).map((k) => k / 8))), (values) => {
+        for (const v of values) expect(plainNumber(v)).toBe(String(v));
+        expect(joinNumbers(values)).toBe(values.join(', '));
+      }),
+      { numRuns: 3000 },
+    );
+    expect(joinNumbers([0.6, -0.25, 1e-7, 0])).toBe('0.6, -0.25, 1e-7, 0');
   });
 });

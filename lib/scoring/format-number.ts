@@ -38,6 +38,25 @@ export function fmt(n: number, digits = 4): string {
 }
 
 /**
+ * Exactly String(n) — a reading as entered, at full precision — by way of fmt when n has at most 6
+ * decimals (readings as typed do), which gives the same text (see fmt) without the search.
+ */
+export function plainNumber(n: number): string {
+  for (let d = 0; d <= 6; d++) {
+    const scale = POWERS_OF_TEN[d]!;
+    if (Math.round(n * scale) / scale === n) return fmt(n, d);
+  }
+  return String(n);
+}
+
+/** Numbers as String() writes them, joined by ", " (what Array.prototype.join gives for numbers). */
+export function joinNumbers(values: readonly number[]): string {
+  let text = '';
+  for (let i = 0; i < values.length; i++) text += i === 0 ? plainNumber(values[i]!) : `, ${plainNumber(values[i]!)}`;
+  return text;
+}
+
+/**
  * Round to `digits` decimals (at most 12) for the result data; −0 becomes 0 so results survive a
  * JSON round trip unchanged (JSON has no negative zero). Scaled Math.round rather than toFixed,
  * which is many times slower and runs for every figure of a report.

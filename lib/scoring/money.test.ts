@@ -27,8 +27,8 @@ describe('money', () => {
       return `${minor < 0 ? '−' : ''}EUR ${whole}${minorDigits ? `.${fraction}` : ''}`;
     };
     for (let magnitude = 1; magnitude < 1e25; magnitude *= 10) {
-      for (const minor of [magnitude, magnitude * 1.234567, -magnitude * 9.87654321 - 1]) {
-        for (const minorDigits of [0, 2, 3]) {
+      for (const minor of [magnitude, magnitude * 1.234567, -magnitude * 9.87654321 - 1, magnitude - 1, magnitude * 1000.5 + 7]) {
+        for (const minorDigits of [0, 1, 2, 3, 6, 7]) {
           expect(formatMoney({ amountMinor: minor, currency: 'EUR' }, minorDigits)).toBe(byPattern(minor, minorDigits));
         }
       }

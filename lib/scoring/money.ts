@@ -28,13 +28,36 @@ function groupThousands(whole: string): string {
   return grouped;
 }
 
+const MINOR_SCALES = [1, 10, 100, 1000, 10_000, 100_000, 1_000_000];
+
+/** n (0 ≤ n < 10^width, an integer) with leading zeros to `width` digits. */
+function padDigits(n: number, width: number): string {
+  const text = `${n}`;
+  return text.length >= width ? text : '0'.repeat(width - text.length) + text;
+}
+
 /**
  * "EUR 12,500.00"-style text, formatted by hand rather than through Intl: the same on every
- * runtime and locale, and fast enough to call for every line of a report.
+ * runtime and locale, and fast enough to call for every line of a report. Amounts below 10^15
+ * minor units are split into groups by integer arithmetic (exact there); larger ones, and more
+ * than 6 minor digits, go through the digit string.
  */
 export function formatMoney(m: Money, minorDigits = 2): string {
   const negative = m.amountMinor < 0;
   const magnitude = Math.abs(Math.round(m.amountMinor));
+  const scale = MINOR_SCALES[minorDigits];
+  if (scale !== undefined && magnitude < 1e15) {
+    let whole = Math.floor(magnitude / scale);
+    const fraction = magnitude - whole * scale;
+    let grouped = '';
+    while (whole >= 1000) {
+      const group = whole % 1000;
+      grouped = `,${padDigits(group, 3)}${grouped}`;
+      whole = (whole - group) / 1000;
+    }
+    grouped = `${whole}${grouped}`;
+    return `${negative ? '−' : ''}${m.currency} ${grouped}${minorDigits ? `.${padDigits(fraction, minorDigits)}` : ''}`;
+  }
   const digits = String(magnitude).padStart(minorDigits + 1, '0');
   const whole = digits.slice(0, digits.length - minorDigits);
   const fraction = digits.slice(digits.length - minorDigits);

@@ -1,4 +1,4 @@
-import { fmt, roundTo } from '../format-number';
+import { fmt, joinNumbers, roundTo } from '../format-number';
 import { BED_STRAIGHTNESS_BY_LENGTH, bedStraightnessLimitMm } from '../limits/lathe-limits';
 import { WEAR_RUBRIC } from '../survey/rubrics';
 import { toMillimetres } from '../units/length';
@@ -36,7 +36,7 @@ export const BED_CHECKS: readonly LatheCheck[] = [
         inputs: [
           `level sensitivity: ${fmt(ctx.levelSensitivityMmPerM ?? 0, 5)} mm/m per division`,
           describeLength('station spacing', run.stationSpacing),
-          `readings (divisions): ${run.longitudinalReadings!.join(', ')}`,
+          `readings (divisions): ${joinNumbers(run.longitudinalReadings!)}`,
           `end-point straightness ${fmt(profile.endPoint.straightnessUm, 1)} µm, least-squares ${fmt(profile.leastSquares.straightnessUm, 1)} µm, shape ${profile.shape}`,
         ],
         what: `Bed straightness (end-point reference, ${profile.shape})`,
