@@ -89,7 +89,8 @@ export const comparisonEntries = mysqlTable(
     // by count ("none" is count = 0); landed cost and inclusions value for readers who see them all.
     index('comparison_entries_listed_idx').on(t.listedAt),
     index('comparison_entries_inspected_idx').on(t.inspectedOn),
-    index('comparison_entries_deal_breakers_idx').on(t.dealBreakerCount),
+    // With the inspection day second, "no deal-breakers, inspected since …" counts from the index alone.
+    index('comparison_entries_deal_breakers_inspected_idx').on(t.dealBreakerCount, t.inspectedOn),
     index('comparison_entries_landed_idx').on(t.landedBaseMinor),
     index('comparison_entries_inclusions_idx').on(t.inclusionsValueMinor),
   ],

@@ -1,0 +1,2 @@
+DROP INDEX `comparison_entries_deal_breakers_idx` ON `comparison_entries`;--> statement-breakpoint
+CREATE INDEX `comparison_entries_deal_breakers_inspected_idx` ON `comparison_entries` (`deal_breaker_count`,`inspected_on`);
