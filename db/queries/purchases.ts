@@ -13,6 +13,7 @@ export async function listBuyerOrders(buyerId: string) {
     .select({
       id: orders.id,
       status: orders.status,
+      purpose: orders.purpose,
       amountMinor: orders.amountMinor,
       currency: orders.currency,
       createdAt: orders.createdAt,
@@ -76,6 +77,7 @@ export async function listOrdersForAdmin(filter: { status?: OrderStatus; limit?:
     .select({
       id: orders.id,
       status: orders.status,
+      purpose: orders.purpose,
       amountMinor: orders.amountMinor,
       currency: orders.currency,
       createdAt: orders.createdAt,

@@ -3,6 +3,7 @@
 import { revalidatePath } from 'next/cache';
 import { runAsCurrentUser } from '@/lib/auth/adapters';
 import { cancelInspection, requestInspection } from '@/lib/workflow/inspections';
+import { setListingStatus } from '@/lib/workflow/listing-status';
 import { createMachine, updateMachine } from '@/lib/workflow/machines';
 
 export async function createMachineAction(input: unknown) {
@@ -26,5 +27,11 @@ export async function requestInspectionAction(input: unknown) {
 export async function cancelInspectionAction(input: unknown) {
   const result = await runAsCurrentUser(cancelInspection, input);
   if (result.ok) revalidatePath('/machines');
+  return result;
+}
+
+export async function setListingStatusAction(input: unknown) {
+  const result = await runAsCurrentUser(setListingStatus, input);
+  if (result.ok) revalidatePath(`/machines/${result.data.machineId}`);
   return result;
 }

@@ -38,7 +38,9 @@ export default async function PurchasesPage({ searchParams }: { searchParams: Pr
         >
           {waiting
             ? 'Thank you. We are waiting for the payment provider to confirm your payment; this page refreshes by itself.'
-            : returning.status === 'paid'
+            : returning.status === 'paid' && returning.purpose === 'reinspection'
+              ? `Payment confirmed. The re-inspection of the ${returning.maker} ${returning.model} is with our coordinators, and a receipt is on its way by e-mail.`
+              : returning.status === 'paid'
               ? `Payment confirmed. The ${returning.maker} ${returning.model} report is ready below, and a receipt is on its way by e-mail.`
               : `This payment is ${ORDER_STATUS_WORDS[returning.status].word.toLowerCase()}.`}
         </p>
@@ -100,7 +102,7 @@ export default async function PurchasesPage({ searchParams }: { searchParams: Pr
                       <td className="py-2 pr-4">{receiptNumber(o.id)}</td>
                       <td className="py-2 pr-4">
                         <Link href={`/reports/${o.reportId}`} className="hover:text-copper">
-                          {o.maker} {o.model}, v{o.version}
+                          {o.purpose === 'reinspection' ? `Re-inspection: ${o.maker} ${o.model}` : `${o.maker} ${o.model}, v${o.version}`}
                         </Link>
                       </td>
                       <td className="py-2 pr-4 text-right">{formatMoney(o.amountMinor, o.currency)}</td>

@@ -7,6 +7,7 @@ import { requirePageSession } from '@/lib/auth/session';
 import { formatDateTime, formatMoney } from '@/lib/format';
 import { receiptNumber } from '@/lib/payments/receipt-number';
 import { can } from '@/lib/roles';
+import { OutstandingRefunds } from './outstanding-refunds';
 import { RefundForm } from './refund-form';
 
 export const metadata: Metadata = { title: 'Report orders' };
@@ -23,8 +24,10 @@ export default async function OrdersPage() {
       <h1 className="mt-1 text-3xl font-semibold">Report orders</h1>
       <p className="mt-2 max-w-2xl text-ink-soft">
         Every purchase of a report, newest first. A refund returns the fee through the payment provider, ends the buyer&apos;s access and tells
-        the buyer by e-mail. Payments for reports withdrawn in the meantime are refunded automatically.
+        the buyer by e-mail. Payments for reports withdrawn in the meantime are refunded automatically, and so are re-inspections of machines
+        sold or withdrawn before the visit started.
       </p>
+      <OutstandingRefunds />
       <Card className="mt-8">
         {orders.length === 0 ? (
           <EmptyState title="No orders yet" text="Orders appear here when a buyer starts paying for a report." />
@@ -53,7 +56,7 @@ export default async function OrdersPage() {
                       <span className="block text-sm text-ink-soft">{o.buyerEmail}</span>
                     </td>
                     <td className="py-3 pr-4">
-                      {o.maker} {o.model}, v{o.version}
+                      {o.purpose === 'reinspection' ? `Re-inspection: ${o.maker} ${o.model} (from v${o.version})` : `${o.maker} ${o.model}, v${o.version}`}
                       {o.reportStatus === 'withdrawn' ? <span className="block text-sm text-band-worn">report withdrawn</span> : null}
                     </td>
                     <td className="py-3 pr-4 text-right">{formatMoney(o.amountMinor, o.currency)}</td>

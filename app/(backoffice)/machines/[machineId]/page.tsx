@@ -9,10 +9,12 @@ import { SIZE_CLASS_LABELS } from '@/lib/machine-size';
 import { mayTransition } from '@/lib/roles';
 import { loadOwnMachine } from '../load-machine';
 import { CancelInspectionForm } from './cancel-inspection-form';
+import { ListingStatusControl } from './listing-status-control';
 
 export const metadata: Metadata = { title: 'Machine' };
 
 const OPEN = new Set(['requested', 'booked', 'on_site', 'in_review']);
+const LISTING_WORDS: Record<string, string> = { draft: 'Draft listing', listed: 'Listed machine', sold: 'Sold', withdrawn: 'Withdrawn from sale' };
 
 export default async function MachinePage({ params }: { params: Promise<{ machineId: string }> }) {
   const { machineId } = await params;
@@ -38,11 +40,12 @@ export default async function MachinePage({ params }: { params: Promise<{ machin
     <>
       <div className="flex flex-wrap items-start justify-between gap-4">
         <div>
-          <p className="text-sm font-semibold uppercase tracking-widest text-copper">{machine.listingStatus === 'draft' ? 'Draft listing' : 'Listed machine'}</p>
+          <p className="text-sm font-semibold uppercase tracking-widest text-copper">{LISTING_WORDS[machine.listingStatus]}</p>
           <h1 className="mt-1 text-3xl font-semibold">
             {machine.maker} {machine.model}
           </h1>
           {machine.serialNumber ? <p className="figures text-ink-soft">Serial {machine.serialNumber}</p> : null}
+          {user.role === 'seller' ? <ListingStatusControl machineId={machine.id} listingStatus={machine.listingStatus} /> : null}
         </div>
         <div className="flex flex-wrap gap-2">
           <ButtonLink href={`/machines/${machine.id}/edit`} variant="secondary">

@@ -20,6 +20,8 @@ import { CurrencyBanner } from './currency-banner';
 import { DisclosurePanel } from './disclosure-panel';
 import { InclusionsPanel } from './inclusions-panel';
 import { LandedCostPanel } from './landed-cost-panel';
+import { ReinspectionPanel } from './reinspection-panel';
+import { reinspectionOffer } from '@/lib/reinspection/offer';
 import { ThermalStatesPanel } from './thermal-states-panel';
 
 export const metadata: Metadata = { title: 'Report summary' };
@@ -39,11 +41,11 @@ export default async function ReportSummaryPage({
   searchParams,
 }: {
   params: Promise<{ id: string }>;
-  searchParams: Promise<{ checkout?: string }>;
+  searchParams: Promise<{ checkout?: string; reinspection?: string }>;
 }) {
   const user = await requirePageSession();
   const { id } = await params;
-  const { checkout } = await searchParams;
+  const { checkout, reinspection } = await searchParams;
   const reportId = Number(id);
   const owner = user.role === 'seller';
   if (!Number.isInteger(reportId) || reportId <= 0 || (!can(user.role, 'report.browse') && !owner)) notFound();
@@ -78,6 +80,22 @@ export default async function ReportSummaryPage({
       {/* Deal-breakers head the summary whatever the grade. */}
       <DealBreakersPanel dealBreakers={findings?.dealBreakers ?? []} showsFindings={showsFindings} />
       {currency ? <CurrencyBanner currency={currency} /> : null}
+      {facts && currency && can(user.role, 'reinspection.request') && !superseded ? (
+        <ReinspectionPanel
+          reportId={report.id}
+          machineId={facts.machineId}
+          userId={user.id}
+          listingStatus={facts.listingStatus}
+          offer={reinspectionOffer(currency, new Date())}
+          fee={report.feeMinor === null ? null : { amountMinor: report.feeMinor, currency: report.feeCurrency ?? 'EUR' }}
+          returnedFromCheckout={reinspection === 'returned'}
+        />
+      ) : null}
+      {reinspection === 'cancelled' ? (
+        <p role="status" className="mt-6 rounded-lg border border-line-strong bg-paper-sunken px-4 py-3">
+          Re-inspection payment cancelled. Nothing was charged.
+        </p>
+      ) : null}
       {checkout === 'cancelled' ? (
         <p role="status" className="mt-6 rounded-lg border border-line-strong bg-paper-sunken px-4 py-3">
           Payment cancelled. Nothing was charged; you can buy the report whenever you are ready.
