@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { BAND_TABLE, type CheckBand } from '@/lib/scoring';
+import { BAND_TABLE, type CheckBand } from '@/lib/scoring/grading/bands';
 
 /**
  * A check's condition band as Waygrade shows it everywhere (survey, review, PDF): the band's word,

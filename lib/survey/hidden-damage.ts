@@ -1,4 +1,4 @@
-import { DEAL_BREAKER_ITEMS, HIDDEN_DAMAGE_ITEMS } from '@/lib/scoring';
+import { DEAL_BREAKER_ITEMS, HIDDEN_DAMAGE_ITEMS } from '@/lib/scoring/survey/checklist-items';
 import type { DraftSurvey } from './draft-survey-schema';
 
 /** The labels of every hidden-damage item and deal-breaker answered "yes", in checklist order. */

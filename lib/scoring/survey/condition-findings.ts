@@ -1,6 +1,9 @@
 import { z } from 'zod';
 import { lengthSchema, positiveLengthSchema, temperatureRiseSchema } from './quantities';
 import { NOISE_RUBRIC, rubricRatingSchema } from './rubrics';
+import { DEAL_BREAKER_ITEMS, HIDDEN_DAMAGE_ITEMS, NOT_INSPECTED_AREAS, type DealBreakerId, type HiddenDamageId } from './checklist-items';
+
+export * from './checklist-items';
 
 /**
  * Survey members added in format v1.1 (all optional, so a v1 survey stays valid): the power-run
@@ -76,25 +79,6 @@ export const findingSchema = z
   })
   .strict();
 
-export const HIDDEN_DAMAGE_ITEMS = [
-  { id: 'freshPaintOverFiller', label: 'Fresh paint over filler' },
-  { id: 'welds', label: 'Welds or brazed repairs' },
-  { id: 'nonOriginalHandles', label: 'Non-original handles or levers' },
-  { id: 'chippedCastings', label: 'Chipped castings' },
-  { id: 'crashMarks', label: 'Crash marks (chuck jaws, compound, ways)' },
-  { id: 'crackedChuck', label: 'Cracked chuck' },
-] as const;
-
-export const DEAL_BREAKER_ITEMS = [
-  { id: 'crackedCasting', label: 'Cracked casting (bed, headstock, apron or gearbox)' },
-  { id: 'growlingSpindleBearings', label: 'Growling spindle bearings' },
-  { id: 'brokenGearTeeth', label: 'Broken gear teeth' },
-  { id: 'motorCannotRunOnSupply', label: 'Motor cannot run on the stated supply' },
-] as const;
-
-export type HiddenDamageId = (typeof HIDDEN_DAMAGE_ITEMS)[number]['id'];
-export type DealBreakerId = (typeof DEAL_BREAKER_ITEMS)[number]['id'];
-
 export const hiddenDamageSchema = z
   .object(Object.fromEntries(HIDDEN_DAMAGE_ITEMS.map((item) => [item.id, findingSchema.describe(item.label).optional()])) as Record<HiddenDamageId, z.ZodOptional<typeof findingSchema>>)
   .strict();
@@ -113,20 +97,6 @@ export const safetyGateSchema = z
   })
   .strict()
   .describe('Confirmed by the inspector before any step that powers the machine');
-
-export const NOT_INSPECTED_AREAS = [
-  'lubrication',
-  'gearboxAndFeeds',
-  'drive',
-  'bedAndWays',
-  'spindle',
-  'slidesAndScrews',
-  'tailstock',
-  'testCuts',
-  'electricalAndSafety',
-  'accessories',
-  'powerRun',
-] as const;
 
 export const notInspectedSchema = z
   .array(

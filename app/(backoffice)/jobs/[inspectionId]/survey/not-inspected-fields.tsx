@@ -1,6 +1,7 @@
 'use client';
 
-import { AREA_LABELS, NOT_INSPECTED_AREAS } from '@/lib/scoring';
+import { AREA_LABELS } from '@/lib/scoring/grading/not-inspected';
+import { NOT_INSPECTED_AREAS } from '@/lib/scoring/survey/checklist-items';
 import { ChoiceField, TextField } from './fields/bound-fields';
 import type { SurveyForm } from './fields/survey-form';
 

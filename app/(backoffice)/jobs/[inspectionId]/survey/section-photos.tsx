@@ -1,12 +1,25 @@
 'use client';
 
-import Image from 'next/image';
 import { useRef, useState } from 'react';
-import { useUploadThing } from '@/lib/storage/upload-helpers';
 import type { SurveyPhoto } from '@/lib/survey/survey-photo';
 import type { SurveySectionId } from '@/lib/survey/survey-sections';
 
 type Upload = { file: File; progress: number; error: string | null; busy: boolean };
+
+type PhotoUploadModule = typeof import('./photo-upload');
+let uploader: Promise<PhotoUploadModule> | null = null;
+
+/**
+ * The uploader, fetched the first time the inspector reaches for a photo control. A failed fetch
+ * (no signal) is forgotten, so the Retry button fetches it again.
+ */
+function loadUploader(): Promise<PhotoUploadModule> {
+  uploader ??= import('./photo-upload').catch((error: unknown) => {
+    uploader = null;
+    throw error;
+  });
+  return uploader;
+}
 
 /**
  * Photos for one section: the camera opens straight from the button on a phone, each upload shows
@@ -30,31 +43,23 @@ export function SectionPhotos({
   const cameraInput = useRef<HTMLInputElement>(null);
   const fileInput = useRef<HTMLInputElement>(null);
   const patch = (file: File, change: Partial<Upload>) => setUploads((list) => list.map((u) => (u.file === file ? { ...u, ...change } : u)));
-  // uploadthing reports progress per request; photos go one a request, so it is the sending file's.
-  const sending = useRef<File | null>(null);
-  const { startUpload } = useUploadThing('surveyPhoto', {
-    uploadProgressGranularity: 'fine',
-    onUploadProgress: (progress) => {
-      if (sending.current) patch(sending.current, { progress });
-    },
-  });
 
   async function send(file: File) {
     patch(file, { busy: true, error: null, progress: 0 });
-    sending.current = file;
     try {
-      const result = await startUpload([file], { inspectionId, section });
-      const answer = result?.[0]?.serverData;
-      if (!answer) throw new Error('The upload did not finish. Check the signal and try again.');
+      const { uploadSurveyPhoto } = await loadUploader();
+      const answer = await uploadSurveyPhoto(file, { inspectionId, section }, (progress) => patch(file, { progress }));
+      if (!answer) throw new Error('no answer');
       if (!answer.ok) {
         patch(file, { busy: false, error: answer.message });
         return;
       }
       onAdded(answer.photo);
       setUploads((list) => list.filter((u) => u.file !== file));
-    } catch (error) {
-      const message = error instanceof Error && error.message ? error.message : 'The upload failed.';
-      patch(file, { busy: false, error: navigator.onLine ? message : 'No signal: the photo is kept here — retry when you are back online.' });
+    } catch {
+      // The uploader could not be fetched, the transfer broke off, or the server gave no answer: the
+      // file stays in the list for a retry either way.
+      patch(file, { busy: false, error: navigator.onLine ? 'The upload did not finish. Check the signal and try again.' : 'No signal: the photo is kept here — retry when you are back online.' });
     }
   }
 
@@ -76,7 +81,9 @@ export function SectionPhotos({
           {photos.map((photo) => (
             <li key={photo.id}>
               <a href={photo.displayUrl} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-lg border border-line">
-                <Image unoptimized src={photo.thumbUrl} alt={photo.caption ?? `Photo ${photo.id}`} width={320} height={Math.round((320 * photo.heightPx) / photo.widthPx)} className="aspect-square h-auto w-full object-cover" />
+                {/* A plain img: the server already made this thumbnail at its size, so next/image would only add its script to the survey's first load. */}
+                {/* eslint-disable-next-line @next/next/no-img-element */}
+                <img src={photo.thumbUrl} alt={photo.caption ?? `Photo ${photo.id}`} width={320} height={Math.round((320 * photo.heightPx) / photo.widthPx)} loading="lazy" decoding="async" className="aspect-square h-auto w-full object-cover" />
               </a>
             </li>
           ))}
@@ -113,10 +120,10 @@ export function SectionPhotos({
         </ul>
       ) : null}
       <div className="mt-3 grid grid-cols-2 gap-2">
-        <button type="button" onClick={() => cameraInput.current?.click()} className="min-h-[52px] rounded-lg bg-copper px-4 font-semibold text-white hover:bg-copper-dark">
+        <button type="button" onPointerDown={() => void loadUploader().catch(() => undefined)} onClick={() => cameraInput.current?.click()} className="min-h-[52px] rounded-lg bg-copper px-4 font-semibold text-white hover:bg-copper-dark">
           Take photo
         </button>
-        <button type="button" onClick={() => fileInput.current?.click()} className="min-h-[52px] rounded-lg border border-line-strong bg-paper-raised px-4 font-semibold hover:bg-paper-sunken">
+        <button type="button" onPointerDown={() => void loadUploader().catch(() => undefined)} onClick={() => fileInput.current?.click()} className="min-h-[52px] rounded-lg border border-line-strong bg-paper-raised px-4 font-semibold hover:bg-paper-sunken">
           Choose photo
         </button>
       </div>

@@ -1,9 +1,8 @@
 'use client';
 
-import { useCallback, useDeferredValue, useMemo, useState } from 'react';
-import { safeScoreSurvey, type CheckResult } from '@/lib/scoring';
+import { Suspense, lazy, useCallback, useEffect, useMemo, useState } from 'react';
+import type { CheckResult } from '@/lib/scoring';
 import type { DraftSurvey } from '@/lib/survey/draft-survey-schema';
-import { scorableDraft } from '@/lib/survey/scorable-draft';
 import { sectionsStarted } from '@/lib/survey/section-progress';
 import { sectionUnitOf, withSectionUnit, type SectionUnit } from '@/lib/survey/section-unit';
 import { POWER_ON_SECTIONS, SURVEY_SECTIONS, type SurveySectionId } from '@/lib/survey/survey-sections';
@@ -12,17 +11,24 @@ import type { SurveyPhoto } from '@/lib/survey/survey-photo';
 import { getAt, setAt, type SurveyPath } from '@/lib/survey/survey-paths';
 import type { SurveyForm } from './fields/survey-form';
 import { SectionChecks } from './live/section-checks';
+import { useLiveChecks } from './live/use-live-checks';
 import { SafetyCautionsPanel } from './safety-cautions-panel';
 import { SafetyGate } from './safety-gate';
 import { SaveNotice, SaveStatus } from './save-status';
 import { SECTION_DATA_KEYS, SECTION_SCREENS } from './section-screens';
 import { SectionPhotos } from './section-photos';
-import { SubmitStep } from './submit-step';
 import { SurveyProgress } from './survey-progress';
 import { UnitSwitch } from './unit-switch';
 import { useSurveyAutosave } from './use-survey-autosave';
 
 const SUBMIT_STEP = SURVEY_SECTIONS.length;
+
+// The last screen checks the whole survey against the format, so it brings the validator: it is
+// fetched on its own, in the background once the first screen is up, so it is there even if the
+// signal drops before the inspector gets to it.
+// (React.lazy rather than next/dynamic: the same split without next/dynamic's own script.)
+const loadSubmitStep = () => import('./submit-step').then((module) => ({ default: module.SubmitStep }));
+const SubmitStep = lazy(loadSubmitStep);
 
 function photoCountsBySection(photos: readonly SurveyPhoto[]): Record<string, number> {
   const counts: Record<string, number> = {};
@@ -57,6 +63,16 @@ export function SurveyWorkspace({
   initialStep: number;
 }) {
   const autosave = useSurveyAutosave({ inspectionId, initialVersion, initialData });
+  // Fetch the last screen while the inspector works on this one (see loadSubmitStep above).
+  useEffect(() => {
+    const preload = () => void loadSubmitStep().catch(() => undefined);
+    if (typeof window.requestIdleCallback !== 'function') {
+      const timer = setTimeout(preload, 2_000);
+      return () => clearTimeout(timer);
+    }
+    const idle = window.requestIdleCallback(preload, { timeout: 5_000 });
+    return () => window.cancelIdleCallback(idle);
+  }, []);
   const { data, state, revision, saver } = autosave;
   const update = saver.update;
   const [step, setStep] = useState(initialStep);
@@ -72,12 +88,8 @@ export function SurveyWorkspace({
   }, []);
 
   // Live bands: the scoring library runs here on what is typed so far (unfinished groups set aside).
-  const deferred = useDeferredValue(data);
-  const checksById = useMemo(() => {
-    const scorable = scorableDraft(deferred);
-    const outcome = scorable ? safeScoreSurvey(scorable) : null;
-    return outcome?.ok ? new Map(outcome.result.checks.map((c) => [c.id, c])) : null;
-  }, [deferred]);
+  const live = useLiveChecks(data);
+  const checksById = live.loaded ? live.byId : null;
   const started = useMemo(() => new Set(sectionsStarted(data)), [data]);
 
   const section = step < SUBMIT_STEP ? SURVEY_SECTIONS[step]! : null;
@@ -143,7 +155,7 @@ export function SurveyWorkspace({
             ) : (
               <Screen key={`${section.id}-${revision}-${unit}`} form={form} />
             )}
-            {section.checks.length ? <SectionChecks checks={sectionChecks} ready={Boolean(checksById)} /> : null}
+            {section.checks.length ? <SectionChecks checks={sectionChecks} state={!live.loaded ? 'loading' : checksById ? 'ready' : 'needs-size'} /> : null}
             <SectionPhotos
               inspectionId={inspectionId}
               section={section.id}
@@ -153,17 +165,25 @@ export function SurveyWorkspace({
             />
           </>
         ) : (
-          <SubmitStep
-            key={revision}
-            inspectionId={inspectionId}
-            form={form}
-            data={data}
-            photoCount={photos.length}
-            sectionPhotoCounts={photoCountsBySection(photos)}
-            saveState={state}
-            confirmedVersion={saver.confirmedVersion}
-            onGoTo={(id) => go(SURVEY_SECTIONS.findIndex((s) => s.id === id))}
-          />
+          <Suspense
+            fallback={
+              <p className="text-ink-soft" role="status">
+                Loading the final check…
+              </p>
+            }
+          >
+            <SubmitStep
+              key={revision}
+              inspectionId={inspectionId}
+              form={form}
+              data={data}
+              photoCount={photos.length}
+              sectionPhotoCounts={photoCountsBySection(photos)}
+              saveState={state}
+              confirmedVersion={saver.confirmedVersion}
+              onGoTo={(id) => go(SURVEY_SECTIONS.findIndex((s) => s.id === id))}
+            />
+          </Suspense>
         )}
       </div>
 

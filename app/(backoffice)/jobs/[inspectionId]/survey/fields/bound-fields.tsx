@@ -1,7 +1,7 @@
 'use client';
 
 import type { Rubric } from '@/lib/scoring';
-import { DEVICE_STATES, OIL_LEVELS } from '@/lib/scoring';
+import { DEVICE_STATES, OIL_LEVELS } from '@/lib/scoring/survey/rubric-levels';
 import type { SurveyPath } from '@/lib/survey/survey-paths';
 import { ChoiceInput, type Choice } from './choice-input';
 import { NumberInput, type NumberBounds } from './number-input';

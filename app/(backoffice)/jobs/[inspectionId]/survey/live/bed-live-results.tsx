@@ -1,7 +1,9 @@
 'use client';
 
 import { BedProfilePlot } from '@/components/charts/bed-profile-plot';
-import { bedTwist, levelProfile, toMillimetres, toMillimetresPerMetre, type Length, type Slope } from '@/lib/scoring';
+import { bedTwist, levelProfile } from '@/lib/scoring/measure/level-profile';
+import { toMillimetres, type Length } from '@/lib/scoring/units/length';
+import { toMillimetresPerMetre, type Slope } from '@/lib/scoring/units/slope';
 
 const SHAPE_WORDS = { convex: 'Convex — middle high (allowed)', concave: 'Concave — middle low (not allowed)', straight: 'Straight within the level’s step' } as const;
 

@@ -19,13 +19,17 @@ function notMeasuredReason(check: CheckResult) {
  * The bands of this screen's checks, graded by the scoring library in the browser from what is typed
  * so far. Unmeasured checks say so; nothing is assumed to pass.
  */
-export function SectionChecks({ checks, ready }: { checks: readonly CheckResult[]; ready: boolean }) {
+export function SectionChecks({ checks, state }: { checks: readonly CheckResult[]; state: 'loading' | 'needs-size' | 'ready' }) {
   return (
-    <section aria-labelledby="section-checks-title" className="rounded-card border border-line bg-paper-raised p-4" data-testid="section-checks">
+    <section aria-labelledby="section-checks-title" className="rounded-card border border-line bg-paper-raised p-4" data-testid="section-checks" data-state={state}>
       <h3 id="section-checks-title" className="text-lg font-semibold">
         Results so far
       </h3>
-      {!ready ? (
+      {state === 'loading' ? (
+        <p className="mt-2 text-ink-soft" role="status">
+          Working out the bands…
+        </p>
+      ) : state === 'needs-size' ? (
         <p className="mt-2 text-ink-soft">Bands appear once the swing over bed and the distance between centres are set on the first screen.</p>
       ) : (
         <ul className="mt-2 divide-y divide-line">

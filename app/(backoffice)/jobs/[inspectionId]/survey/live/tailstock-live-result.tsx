@@ -1,6 +1,7 @@
 'use client';
 
-import { fromMillimetres, tailstockAlignmentFromIndicator, toMillimetres, type Length } from '@/lib/scoring';
+import { tailstockAlignmentFromIndicator } from '@/lib/scoring/measure/tailstock-alignment';
+import { fromMillimetres, toMillimetres, type Length } from '@/lib/scoring/units/length';
 import type { SectionUnit } from '@/lib/survey/section-unit';
 import { formatLength } from './format-length';
 

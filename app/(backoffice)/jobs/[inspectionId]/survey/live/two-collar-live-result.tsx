@@ -1,6 +1,7 @@
 'use client';
 
-import { fromMillimetres, toMillimetres, twoCollarTest, type Length } from '@/lib/scoring';
+import { twoCollarTest } from '@/lib/scoring/measure/two-collar';
+import { fromMillimetres, toMillimetres, type Length } from '@/lib/scoring/units/length';
 import type { SectionUnit } from '@/lib/survey/section-unit';
 import { formatLength } from './format-length';
 

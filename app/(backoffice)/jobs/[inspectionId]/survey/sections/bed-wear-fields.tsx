@@ -2,7 +2,8 @@
 
 import { useState } from 'react';
 import { WearProfilePlot } from '@/components/charts/wear-profile-plot';
-import { toMillimetres, wayWearProfile, type Length } from '@/lib/scoring';
+import { wayWearProfile } from '@/lib/scoring/measure/way-wear';
+import { toMillimetres, type Length } from '@/lib/scoring/units/length';
 import { LengthField } from '../fields/bound-fields';
 import type { SurveyForm } from '../fields/survey-form';
 import { FieldGroup } from './field-group';

@@ -1,6 +1,7 @@
 'use client';
 
-import { beltSpanMm, deflectionBySixtyFourthRule, fromMillimetres, toMillimetres, type Length } from '@/lib/scoring';
+import { beltSpanMm, deflectionBySixtyFourthRule } from '@/lib/scoring/measure/v-belt';
+import { fromMillimetres, toMillimetres, type Length } from '@/lib/scoring/units/length';
 import { LengthField, RatingField } from '../fields/bound-fields';
 import type { SurveyForm } from '../fields/survey-form';
 import { formatLength } from '../live/format-length';

@@ -1,6 +1,6 @@
 'use client';
 
-import { DEAL_BREAKER_ITEMS, HIDDEN_DAMAGE_ITEMS } from '@/lib/scoring';
+import { DEAL_BREAKER_ITEMS, HIDDEN_DAMAGE_ITEMS } from '@/lib/scoring/survey/checklist-items';
 import { TextField, YesNoField } from '../fields/bound-fields';
 import type { SurveyForm } from '../fields/survey-form';
 import { FieldGroup } from './field-group';

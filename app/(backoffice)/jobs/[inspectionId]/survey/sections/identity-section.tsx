@@ -1,6 +1,6 @@
 'use client';
 
-import { SLOPE_UNITS } from '@/lib/scoring';
+import { SLOPE_UNITS } from '@/lib/scoring/units/slope';
 import { ChoiceField, LengthField, PlainNumberField, QuantityField, TextField } from '../fields/bound-fields';
 import type { SurveyForm } from '../fields/survey-form';
 import { FieldGroup } from './field-group';

@@ -1,4 +1,4 @@
-import { ALL_RUBRICS, type Rubric } from '@/lib/scoring';
+import { ALL_RUBRICS, type Rubric } from '@/lib/scoring/survey/rubric-levels';
 
 const rubric = (id: string): Rubric => {
   const found = ALL_RUBRICS.find((r) => r.id === id);
