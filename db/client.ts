@@ -19,6 +19,11 @@ function createPool(url: string) {
   });
 }
 
+/**
+ * With DATABASE_REPLICA_URLS set, Drizzle's `withReplicas` sends select() to a replica and
+ * insert/update/delete/execute and every transaction to the primary. `primary` is kept apart for
+ * reads that must see a write made a moment ago (see `primaryOf`).
+ */
 function createDatabase() {
   const primaryPool = createPool(env().DATABASE_URL);
   const primary = drizzle(primaryPool, { schema, mode: 'default' });
@@ -27,9 +32,9 @@ function createDatabase() {
     .map((url) => url.trim())
     .filter(Boolean);
   const pools = [primaryPool, ...replicaUrls.map(createPool)];
-  if (replicaUrls.length === 0) return { db: primary, pools };
+  if (replicaUrls.length === 0) return { db: primary, primary, pools };
   const [first, ...rest] = replicaUrls.map((url, i) => drizzle(pools[i + 1]!, { schema, mode: 'default' }));
-  return { db: withReplicas(primary, [first!, ...rest]) as unknown as Database, pools };
+  return { db: withReplicas(primary, [first!, ...rest]) as unknown as Database, primary, pools };
 }
 
 // One pool per process, kept across hot reloads in development.
@@ -48,6 +53,16 @@ export const db: Database = new Proxy({} as Database, {
     return typeof value === 'function' ? (value as (...a: unknown[]) => unknown).bind(target) : value;
   },
 });
+
+/**
+ * Where a read must see the latest committed write, whatever a replica has applied so far: the
+ * shared `db` becomes the primary; a transaction (already on the primary) is returned as it is.
+ * For decisions taken right after a write elsewhere: who may touch an inspection or download a
+ * paid report.
+ */
+export function primaryOf<T>(reader: T): T {
+  return (reader === (db as unknown) ? instance().primary : reader) as T;
+}
 
 export async function closeDatabase() {
   const existing = globalForDb.waygradeDb;

@@ -2,7 +2,7 @@ import 'server-only';
 import { and, eq, isNull } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/mysql-core';
 import { reportAccessGrants, reports } from '@/db/schema';
-import type { Database } from '@/db/client';
+import { primaryOf, type Database } from '@/db/client';
 
 type Reader = Pick<Database, 'select'>;
 
@@ -11,9 +11,11 @@ const grantedReport = alias(reports, 'granted_report');
 /**
  * May this person download this report? Yes with an unrevoked grant for it or for another version
  * of the same inspection: a buyer who paid keeps every later correction, as the receipt promises.
+ * Read from the primary: the buyer downloads straight after the payment's grant is written, before
+ * a replica may have it.
  */
 export async function hasReportAccess(reader: Reader, userId: string, reportId: number): Promise<boolean> {
-  const [row] = await reader
+  const [row] = await primaryOf(reader)
     .select({ id: reportAccessGrants.id })
     .from(reports)
     .innerJoin(grantedReport, eq(grantedReport.inspectionId, reports.inspectionId))

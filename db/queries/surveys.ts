@@ -1,14 +1,17 @@
 import 'server-only';
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import { inspections, machines, surveys, users } from '@/db/schema';
-import type { Database } from '@/db/client';
+import { primaryOf, type Database } from '@/db/client';
 
 type Reader = Pick<Database, 'select'>;
 type Writer = Pick<Database, 'select' | 'insert' | 'update'>;
 
-/** The inspection with the facts of its machine the survey starts from; `lock` holds the row until commit. */
+/**
+ * The inspection with the facts of its machine the survey starts from; `lock` holds the row until commit.
+ * Read from the primary: the survey page opens straight after "start visit" moved it on site.
+ */
 export async function findInspectionWithMachine(reader: Reader, inspectionId: number, options: { lock?: boolean } = {}) {
-  const query = reader
+  const query = primaryOf(reader)
     .select({
       id: inspections.id,
       status: inspections.status,
@@ -39,16 +42,21 @@ export async function findInspectionWithMachine(reader: Reader, inspectionId: nu
   return row ?? null;
 }
 
+/** Read from the primary: an inspector opens the survey moments after being assigned, before a replica may have the row. */
 export async function isInspectionAssignedTo(reader: Reader, inspectionId: number, inspectorId: string) {
-  const [row] = await reader
+  const [row] = await primaryOf(reader)
     .select({ id: inspections.id })
     .from(inspections)
     .where(and(eq(inspections.id, inspectionId), eq(inspections.inspectorId, inspectorId)));
   return Boolean(row);
 }
 
+/**
+ * Read from the primary: the version handed to the phone is the base of its next autosave, and a
+ * replica a moment behind would make that save look like another device's (409).
+ */
 export async function findSurvey(reader: Reader, inspectionId: number) {
-  const [row] = await reader.select().from(surveys).where(eq(surveys.inspectionId, inspectionId));
+  const [row] = await primaryOf(reader).select().from(surveys).where(eq(surveys.inspectionId, inspectionId));
   return row ?? null;
 }
 

@@ -4,5 +4,11 @@ export const DB_PASSWORD: string;
 export type MariaDbPaths = { port: number; dir: string; dataDir: string; socket: string; pidFile: string; logFile: string };
 export function mariaDbPaths(projectRoot: string): MariaDbPaths;
 export function databaseUrl(paths: MariaDbPaths, database: string): string;
-export function startMariaDb(projectRoot: string, databases: string[], log?: (line: string) => void): Promise<{ paths: MariaDbPaths; startedHere: boolean }>;
+export function startMariaDb(
+  projectRoot: string,
+  databases: string[],
+  log?: (line: string) => void,
+  options?: { serverArgs?: string[] },
+): Promise<{ paths: MariaDbPaths; startedHere: boolean }>;
+export function rootSql(paths: MariaDbPaths, statements: string): string;
 export function stopMariaDb(projectRoot: string, log?: (line: string) => void): Promise<void>;

@@ -75,18 +75,24 @@ function readPid(paths) {
   }
 }
 
-function sql(paths, statements) {
+/** Runs statements as root over the socket; returns the tab-separated output (rows only, no header). */
+export function rootSql(paths, statements) {
   const client = findProgram('mariadb') ?? 'mariadb';
-  const result = spawnSync(client, ['--no-defaults', `--socket=${paths.socket}`, '-uroot', '-e', statements], {
+  const result = spawnSync(client, ['--no-defaults', `--socket=${paths.socket}`, '-uroot', '--batch', '--skip-column-names', '-e', statements], {
     encoding: 'utf8',
   });
   if (result.status !== 0) throw new Error(`MariaDB statement failed: ${result.stderr}`);
+  return result.stdout;
 }
+const sql = rootSql;
 
 const sleep = (ms) => new Promise((resolve) => setTimeout(resolve, ms));
 
-/** Starts the server if it is not running and creates the databases and the app's user. */
-export async function startMariaDb(projectRoot, databases, log = console.log) {
+/**
+ * Starts the server if it is not running and creates the databases and the app's user.
+ * `serverArgs` are added to mariadbd's command line (e.g. a server id and binary log for replication).
+ */
+export async function startMariaDb(projectRoot, databases, log = console.log, { serverArgs = [] } = {}) {
   let paths = mariaDbPaths(projectRoot);
   const mariadbd = ensureDebianPackage('mariadbd', 'mariadb-server', log);
   let startedHere = false;
@@ -140,6 +146,7 @@ export async function startMariaDb(projectRoot, databases, log = console.log) {
         '--query-cache-type=1',
         '--query-cache-size=64M',
         '--query-cache-limit=4M',
+        ...serverArgs,
       ],
       { detached: true, stdio: 'ignore' },
     );
