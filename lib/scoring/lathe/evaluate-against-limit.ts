@@ -33,13 +33,15 @@ export interface DeviationCheckInput {
 export function evaluateDeviation(input: DeviationCheckInput): CheckEvaluation {
   const { permissible: p } = input;
   const { q, wrongDirection } = deviationRatio(input.deviation, p.value, p.direction, input.resolution ?? 0);
+  // The permitted value appears in both sentences; written once.
+  const permittedText = fmt(p.value);
   const formula = wrongDirection
-    ? `q = 1 + |d|/T = 1 + ${fmt(Math.abs(input.deviation))}/${fmt(p.value)} = ${fmt(q, 3)} (deviation in the forbidden direction fails even when small)`
-    : `q = |d|/T = ${fmt(Math.abs(input.deviation))}/${fmt(p.value)} = ${fmt(q, 3)}${DIRECTION_WORDS[p.direction]}`;
+    ? `q = 1 + |d|/T = 1 + ${fmt(Math.abs(input.deviation))}/${permittedText} = ${fmt(q, 3)} (deviation in the forbidden direction fails even when small)`
+    : `q = |d|/T = ${fmt(Math.abs(input.deviation))}/${permittedText} = ${fmt(q, 3)}${DIRECTION_WORDS[p.direction]}`;
   const band = bandFor(q);
   const summary = wrongDirection
     ? `${input.what} ${fmt(input.deviation)} ${input.unit} is the wrong way${input.wrongDirectionText ? ` (${input.wrongDirectionText})` : ''}: ${bandWords(band)}.`
-    : `${input.what} ${fmt(input.deviation)} ${input.unit} against ${fmt(p.value)} ${p.unit} permitted: ${bandWords(band)} (${band.meaning}).`;
+    : `${input.what} ${fmt(input.deviation)} ${input.unit} against ${permittedText} ${p.unit} permitted: ${bandWords(band)} (${band.meaning}).`;
   const evaluation: CheckEvaluation = {
     measured: { value: roundTo(input.deviation, 6), unit: input.unit },
     permissible: p,
