@@ -66,3 +66,6 @@ export const LATHE_KIND_LABELS: Record<ComparisonRow['kind'], string> = {
   general_purpose: 'General purpose',
   toolroom: 'Toolroom',
 };
+
+/** A whole number of days in words: "1 day", "12 days". */
+export const dayCount = (n: number) => `${n.toLocaleString('en-GB')} day${n === 1 ? '' : 's'}`;

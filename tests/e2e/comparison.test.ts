@@ -1,11 +1,17 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
+import { randomUUID } from 'node:crypto';
 import { and, eq, inArray } from 'drizzle-orm';
 import type { BrowserContext, Page } from 'playwright-core';
 import { closeDatabase, db } from '@/db/client';
-import { comparisonEntries, reportAccessGrants, users } from '@/db/schema';
+import { comparisonEntries, machines, reportAccessGrants, surveys, users } from '@/db/schema';
+import { insertDraftReport, releaseDraftReport } from '@/db/queries/report-writes';
+import { demoSurvey } from '@/db/seed/demo-survey';
+import { seededRandom } from '@/db/seed/random';
+import { scoreSurvey, SURVEY_FORMAT_VERSION } from '@/lib/scoring';
 import { openBrowser, screenshot, signIn } from '../support/browser';
+import { createInspection, createMachine } from '../support/workflow-fixtures';
 
 // A dealer's day with the comparison table: filter, sort, export what the filter shows, and put
 // three machines side by side. Runs on the demo data (15 released lathes).
@@ -109,6 +115,67 @@ describe('the dealers’ comparison table', () => {
     const differing = page.locator('tr[data-check]');
     expect(await differing.count()).toBeGreaterThan(0);
     await screenshot(page, 'compare-side-by-side');
+    await page.close();
+  });
+
+  it('filters on no deal-breakers and a report age, sorts by report age and shows exactly those rows', async () => {
+    // A machine inspected yesterday whose report records a cracked casting: only the deal-breaker filter keeps it out.
+    const [seller] = await db.select({ id: users.id }).from(users).where(eq(users.email, 'gwen@kellbrook-turning.example'));
+    const [admin] = await db.select({ id: users.id }).from(users).where(eq(users.email, 'nadia.ferrand@waygrade.example'));
+    const model = `DB-${randomUUID().slice(0, 6)}`;
+    const machineId = await createMachine(seller!.id, { maker: 'Corvane', model });
+    const inspectionId = await createInspection(machineId, seller!.id, 'in_review', null);
+    const [machine] = await db.select().from(machines).where(eq(machines.id, machineId));
+    const inspectedOn = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10);
+    const survey = { ...demoSurvey(machine!, { wear: 0.3, random: seededRandom(inspectionId), inspectedOn }), dealBreakers: { crackedCasting: { present: true, note: 'Crack across the bed at the headstock end' } } };
+    await db.insert(surveys).values({ inspectionId, formatVersion: SURVEY_FORMAT_VERSION, version: 5, data: survey, submittedAt: new Date() });
+    const { reportId } = await db.transaction((tx) => insertDraftReport(tx, { inspectionId, machineId, surveyVersion: 5, inspectorId: null, result: scoreSurvey(survey) }));
+    await db.transaction((tx) => releaseDraftReport(tx, { reportId, reviewerId: admin!.id, sellerId: seller!.id }));
+
+    // A report age that splits the released machines: the median age in days.
+    const today = Math.floor(Date.now() / 86_400_000);
+    const entries = (await db.select().from(comparisonEntries)).map((e) => ({ ...e, age: today - Math.floor(Date.parse(`${e.inspectedOn}T00:00:00Z`) / 86_400_000) }));
+    const ages = entries.map((e) => e.age).sort((a, b) => a - b);
+    const maxAge = ages[Math.floor(ages.length / 2)]!;
+    const expected = entries
+      .filter((e) => e.dealBreakerCount === 0 && e.age <= maxAge)
+      .sort((a, b) => a.age - b.age || b.reportId - a.reportId)
+      .map((e) => e.reportId);
+    expect(expected.length, 'the filter keeps some machines').toBeGreaterThan(0);
+    expect(expected.length, 'the filter drops some machines').toBeLessThan(entries.length - 1);
+
+    const page = await browser.newPage();
+    await signIn(page, DEALER, PASSWORD);
+    await page.goto('/compare');
+    await waitForRows(page);
+    const filters = page.locator('aside .hidden.lg\\:block');
+    await filters.getByRole('group', { name: 'Deal-breakers' }).getByLabel('None recorded').click();
+    await page.waitForURL((url) => url.searchParams.get('dealBreakers') === 'none');
+    await filters.getByLabel('Report age to').fill(String(maxAge));
+    await filters.getByRole('button', { name: 'Apply filters' }).click();
+    await page.waitForURL((url) => url.searchParams.get('reportAgeMax') === String(maxAge));
+    await page.getByRole('button', { name: 'Report age', exact: true }).click();
+    await page.waitForURL((url) => url.searchParams.get('sort') === 'reportAge' && url.searchParams.get('dir') === 'asc');
+    await waitForRows(page);
+    await page.getByRole('status').filter({ hasText: `${expected.length} machines match` }).waitFor();
+
+    const shown = await page.locator('tbody tr[data-report-id]').evaluateAll((rows) => rows.map((r) => Number(r.getAttribute('data-report-id'))));
+    expect(shown).toEqual(expected.slice(0, 50));
+    expect(await page.locator('tbody [data-deal-breakers]').evaluateAll((cells) => cells.map((c) => c.getAttribute('data-deal-breakers')))).toEqual(shown.map(() => '0'));
+    const agesShown = await page.locator('tbody [data-report-age]').evaluateAll((cells) => cells.map((c) => Number(c.getAttribute('data-report-age'))));
+    expect(agesShown).toEqual([...agesShown].sort((a, b) => a - b));
+    expect(Math.max(...agesShown)).toBeLessThanOrEqual(maxAge);
+    await page.locator('[data-landed-cost-basis]').filter({ hasText: 'at 100 km' }).waitFor();
+    await screenshot(page, 'compare-no-deal-breakers-by-report-age');
+
+    // The other way round: only machines with a deal-breaker, named in words with an icon, not by colour alone.
+    await filters.getByRole('group', { name: 'Deal-breakers' }).getByLabel('At least one').click();
+    await page.waitForURL((url) => url.searchParams.get('dealBreakers') === 'any');
+    const flagged = page.locator(`tr[data-report-id="${reportId}"]`);
+    await flagged.waitFor();
+    await flagged.getByText('1 deal-breaker', { exact: true }).waitFor();
+    await flagged.getByText('named in the report').waitFor();
+    await screenshot(page, 'compare-deal-breakers-any');
     await page.close();
   });
 

@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import { GradeChip } from '@/components/ui/grade-chip';
-import type { ComparisonRow } from '@/lib/comparison/comparison-row';
+import { dayCount, type ComparisonRow } from '@/lib/comparison/comparison-row';
 import { formatMm, formatMoney } from '@/lib/format';
 import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '@/lib/scoring/subsystems';
 import { SUBSYSTEM_KEYS } from '@/lib/validation/comparison-query';
@@ -75,7 +75,7 @@ export function ComparisonCards({
                 </>
               ) : null}
               <dt className="text-ink-soft">Listed</dt>
-              <dd className="text-right">{r.daysListed.toLocaleString('en-GB')} days</dd>
+              <dd className="text-right">{dayCount(r.daysListed)}</dd>
               <dt className="text-ink-soft">Report age</dt>
               <dd className="flex justify-end text-right">
                 <ReportAgeCell row={r} />

@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import type { ColumnDef } from '@tanstack/react-table';
 import { GradeChip } from '@/components/ui/grade-chip';
-import { LATHE_KIND_LABELS, type ComparisonRow } from '@/lib/comparison/comparison-row';
+import { dayCount, LATHE_KIND_LABELS, type ComparisonRow } from '@/lib/comparison/comparison-row';
 import { formatDate, formatMm, formatMoney } from '@/lib/format';
 import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '@/lib/scoring/subsystems';
 import { SUBSYSTEM_KEYS, type SortColumn } from '@/lib/validation/comparison-query';
@@ -123,7 +123,7 @@ export const COMPARISON_COLUMNS: ColumnDef<ComparisonRow, unknown>[] = [
     cell: ({ row: { original: r } }) =>
       r.hasDetails ? r.inclusionsValueMinor === null ? <span className="text-sm text-ink-soft">not listed</span> : formatMoney(r.inclusionsValueMinor, r.priceCurrency) : <WithReport />,
   },
-  { id: 'daysListed', header: 'Listed', meta: { group: 'machine', label: 'Days listed', className: NUMBER }, cell: ({ row }) => `${row.original.daysListed.toLocaleString('en-GB')} days` },
+  { id: 'daysListed', header: 'Listed', meta: { group: 'machine', label: 'Days listed', className: NUMBER }, cell: ({ row }) => dayCount(row.original.daysListed) },
   { id: 'reportAge', header: 'Report age', meta: { group: 'machine', label: 'Report age (since inspection)', className: 'figures text-right' }, cell: ({ row }) => <ReportAgeCell row={row.original} /> },
   { id: 'released', header: 'Report', meta: { group: 'machine', label: 'Report date', className: 'figures whitespace-nowrap' }, cell: ({ row }) => formatDate(new Date(row.original.releasedAt)) },
 ];

@@ -1,6 +1,6 @@
 'use client';
 
-import { DEAL_BREAKER_LABELS, type ComparisonRow } from '@/lib/comparison/comparison-row';
+import { dayCount, DEAL_BREAKER_LABELS, type ComparisonRow } from '@/lib/comparison/comparison-row';
 import { formatDate, formatMoney } from '@/lib/format';
 
 const day = (iso: string) => formatDate(new Date(`${iso}T00:00:00Z`));
@@ -44,7 +44,7 @@ export function DealBreakersCell({ row }: { row: ComparisonRow }) {
 export function ReportAgeCell({ row }: { row: ComparisonRow }) {
   return (
     <span className="flex flex-col whitespace-nowrap" data-report-age={row.reportAgeDays} data-stale={row.stale ? 'true' : 'false'}>
-      <span>{row.reportAgeDays.toLocaleString('en-GB')} days</span>
+      <span>{dayCount(row.reportAgeDays)}</span>
       {row.stale ? (
         <span className="inline-flex items-center gap-1 text-xs font-medium text-band-worn" title={`Current until ${day(row.validUntil)}; the machine may have changed since`}>
           <svg aria-hidden="true" viewBox="0 0 16 16" className="h-3 w-3">

@@ -9,7 +9,7 @@ import { loadComparisonViewer } from '@/db/queries/comparison';
 import { loadComparableSalesByIds, loadComparisonEntries, loadReportResults, type ComparisonEntry } from '@/db/queries/side-by-side';
 import { requirePagePermission } from '@/lib/auth/session';
 import { comparablesUsed } from '@/lib/comparison/comparables-used';
-import { DEAL_BREAKER_LABELS, LATHE_KIND_LABELS } from '@/lib/comparison/comparison-row';
+import { dayCount, DEAL_BREAKER_LABELS, LATHE_KIND_LABELS } from '@/lib/comparison/comparison-row';
 import { converterMinorFor, landedCostAssumptions } from '@/lib/comparison/landed-cost-basis';
 import { daysOnMarket, reportCurrency } from '@/lib/decision/report-currency';
 import type { SupplySpec } from '@/lib/decision/phase-converter';
@@ -54,7 +54,7 @@ function ReportAge({ e, r }: { e: ComparisonEntry; r: Reading }) {
   const until = formatDate(new Date(`${currency.validUntil}T00:00:00Z`));
   return (
     <span className="flex flex-col">
-      {currency.ageDays} days
+      {dayCount(currency.ageDays)}
       <span className={`text-sm ${currency.stale ? 'font-medium text-band-worn' : 'text-ink-soft'}`}>{currency.stale ? `▲ Stale since ${until}` : `current to ${until}`}</span>
     </span>
   );
@@ -80,7 +80,7 @@ const FIGURES: ReadonlyArray<[string, (e: ComparisonEntry, details: boolean, rea
   ['Landed cost in your shop *', (e, d, r) => (d ? landedCost(e, r.shop) : <Locked />)],
   ['Inclusions value', (e, d) => (d ? (e.inclusionsValueMinor === null ? 'not listed' : formatMoney(e.inclusionsValueMinor, e.priceCurrency)) : <Locked />)],
   ['Deal-breakers', (e, d) => <DealBreakers e={e} details={d} />],
-  ['Days listed', (e, _d, r) => `${daysOnMarket(e.listedAt, r.now)} days`],
+  ['Days listed', (e, _d, r) => dayCount(daysOnMarket(e.listedAt, r.now))],
   ['Report age', (e, _d, r) => <ReportAge e={e} r={r} />],
   ['Report released', (e) => formatDate(e.releasedAt)],
 ];
