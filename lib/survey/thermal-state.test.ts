@@ -32,6 +32,12 @@ describe('sectionThermalState', () => {
     expect(result.explanation).toMatch(/not known/);
   });
 
+  it('says when the power-run log lacks the state at the start', () => {
+    const result = sectionThermalState('spindle', { liftPlay: { value: 0.02, unit: 'mm' } }, { startedAt: started });
+    expect(result).toMatchObject({ state: null, source: 'not-known' });
+    expect(result.explanation).toBe('The power-run log does not say whether the machine was cold or warm at the start');
+  });
+
   it('explains a clock decision with both times', () => {
     const result = sectionThermalState('tailstock', { thermal: { readingsAt: at(42) } }, { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: started });
     expect(result.explanation).toBe('Read at 08:42 UTC, 42 min after the spindle was started cold at 08:00 UTC (warm from 30 min)');

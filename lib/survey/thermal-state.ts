@@ -79,7 +79,10 @@ export function sectionThermalState(section: ThermalSectionKey, sectionData: unk
     return { ...base, state: ownState, source: 'inspector', explanation: `Set by the inspector as ${ownState}` };
   }
   if (!isState(run.startState)) {
-    return { ...base, state: null, source: 'not-known', explanation: 'No power-run log, so not known whether the machine was cold or warm' };
+    const explanation = asRecord(powerRun)
+      ? 'The power-run log does not say whether the machine was cold or warm at the start'
+      : 'No power-run log, so not known whether the machine was cold or warm';
+    return { ...base, state: null, source: 'not-known', explanation };
   }
   if (run.startState === 'warm') {
     return { ...base, state: 'warm', source: 'started-warm', explanation: 'The machine was already warm when first started on the day (power-run log)' };

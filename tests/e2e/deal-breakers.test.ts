@@ -2,13 +2,14 @@ import { eq } from 'drizzle-orm';
 import type { BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db/client';
-import { machines, reportAccessGrants, reports, surveys } from '@/db/schema';
+import { machineDisclosures, machines, reportAccessGrants, reports, surveys } from '@/db/schema';
 import { demoSurvey } from '@/db/seed/demo-survey';
 import { seededRandom } from '@/db/seed/random';
 import { createAccount, type TestAccount } from '../support/accounts';
 import { openBrowser, screenshot, signIn } from '../support/browser';
 import { photoFile, savedSurvey, waitUntilSaved } from '../support/survey-steps';
 import { createInspection, createMachine } from '../support/workflow-fixtures';
+import { pdfToText } from '../support/pdf-text';
 
 // The inspector records a broken gear tooth with its photo on an otherwise good lathe; once the
 // coordinator releases the report, the buyer's summary opens with the deal-breaker above everything.
@@ -25,6 +26,8 @@ describe('a deal-breaker from the survey to the top of the buyer\'s report', () 
     [seller, coordinator, inspector, buyer] = await Promise.all([createAccount('seller'), createAccount('admin'), createAccount('inspector'), createAccount('buyer')]);
     const machineId = await createMachine(seller.id, { model: `DB-${Date.now().toString(36)}` });
     inspectionId = await createInspection(machineId, seller.id, 'booked', inspector.id);
+    // The seller claims no known faults; the broken gear tooth will contradict it.
+    await db.insert(machineDisclosures).values({ machineId, knownFaults: '', repairsAndRebuilds: '', crashesOrDrops: '', usage: 'hobby', usageNotes: '', supplyVoltage: 400, supplyPhases: 3, included: '', saleTerm: 'as-is' });
     phone = await openBrowser({ width: 390, height: 844 });
     desk = await openBrowser();
   });
@@ -78,6 +81,9 @@ describe('a deal-breaker from the survey to the top of the buyer\'s report', () 
     await page.getByLabel('Way thickness').nth(0).fill('24.96');
     await page.getByLabel('Way thickness').nth(1).fill('25.00');
     await page.getByTestId('wear-profile').locator('rect').nth(1).waitFor();
+    // The bed was read before the power run warmed the machine: the inspector says so with one tap.
+    await page.getByRole('group', { name: 'Machine while these readings were taken' }).getByRole('button', { name: /^Cold/ }).click();
+    await page.locator('[data-thermal-section="bedAndWays"] [data-thermal-state="cold"]').waitFor();
     await waitUntilSaved(page);
     await screenshot(page, 'deal-breaker-02b-bed-wear');
 
@@ -97,12 +103,39 @@ describe('a deal-breaker from the survey to the top of the buyer\'s report', () 
       { distanceFromHeadstock: { value: 250, unit: 'mm' }, thickness: { value: 25, unit: 'mm' } },
     ]);
     expect(saved.data.data.notInspected).toEqual([{ area: 'testCuts', reason: 'No bar stock on site for the test cuts' }]);
+    // The section's readings carry their time, and the inspector's cold.
+    expect(saved.data.data.bedAndWays?.thermal?.machineState).toBe('cold');
+    expect(Date.parse(saved.data.data.bedAndWays?.thermal?.readingsAt ?? '')).toBeGreaterThan(Date.now() - 10 * 60_000);
     await page.close();
   }, 240_000);
 
-  it('shows the buyer the deal-breaker at the top of the released report, above a good grade', async () => {
+  it('shows the coordinator the deal-breaker first, what was not inspected, the contradicted claim and the bed plots before release', async () => {
     const review = await desk.newPage();
     await signIn(review, coordinator.email, coordinator.password);
+    await review.goto(`/inspections/${inspectionId}/review`);
+    const panel = review.getByRole('region', { name: /Deal-breaker/ });
+    await panel.waitFor();
+    await expect(panel.textContent()).resolves.toContain('Two teeth broken off the 60-tooth change gear');
+    const order = await review.evaluate(() => {
+      const text = document.querySelector('main')?.textContent ?? document.body.textContent ?? '';
+      return { deal: text.indexOf('Deal-breaker'), summary: text.indexOf('Overall condition'), checks: text.indexOf('Readings as entered') };
+    });
+    expect(order.deal).toBeGreaterThan(-1);
+    expect(order.deal).toBeLessThan(order.summary);
+    await expect(review.getByTestId('not-inspected').textContent()).resolves.toContain('No bar stock on site for the test cuts');
+    const claim = review.locator('[data-claim="known-faults"]');
+    expect(await claim.getAttribute('data-status')).toBe('contradicted');
+    await expect(claim.textContent()).resolves.toContain('Broken gear teeth');
+    await review.getByRole('img', { name: /Way wear/ }).waitFor();
+    await review.getByRole('img', { name: /Bed profile/ }).waitFor();
+    await expect(review.locator('summary [data-thermal-section="bedAndWays"]').textContent()).resolves.toContain('Cold');
+    await review.getByRole('img', { name: /Way wear/ }).scrollIntoViewIfNeeded();
+    await screenshot(review, 'deal-breaker-02d-review');
+    await review.close();
+  }, 120_000);
+
+  it('shows the buyer the deal-breaker at the top of the released report, above a good grade', async () => {
+    const review = await desk.newPage();
     await review.goto(`/inspections/${inspectionId}/review`);
     await review.getByRole('button', { name: 'Release the report' }).click();
     await review.getByText('Released. The seller has been e-mailed.').waitFor();
@@ -132,6 +165,9 @@ describe('a deal-breaker from the survey to the top of the buyer\'s report', () 
     await page.getByText('Not a warranty').first().waitFor();
     await page.getByText('No advice to buy or not to buy').first().waitFor();
     await screenshot(page, 'deal-breaker-03-buyer-report');
+    const pdf = pdfToText(await (await page.request.get(`/api/reports/${report!.id}/pdf`)).body());
+    expect(pdf).toMatch(/Known faults No known faults .{0,40}Contradicted by the findings/);
+    expect(pdf).toContain('Bed and ways read cold (set by the inspector)');
     await buyerContext.close();
   }, 120_000);
 });

@@ -8,6 +8,8 @@ import type { ScoringResult } from '@/lib/scoring';
 import { createAccount, type TestAccount } from '../support/accounts';
 import { openBrowser, screenshot, signIn } from '../support/browser';
 import { createInspection, createMachine, createSubmittedSurvey } from '../support/workflow-fixtures';
+import { pdfToText } from '../support/pdf-text';
+import { pdfText as pdfTextOf } from '@/lib/pdf/pdf-text';
 
 describe('seller’s disclosure beside the findings', () => {
   let sellerBrowser: BrowserContext;
@@ -17,6 +19,7 @@ describe('seller’s disclosure beside the findings', () => {
   let machineId: number;
   let reportId: number;
   let result: ScoringResult;
+  let coordinatorId: string;
 
   beforeAll(async () => {
     const [s, b, coordinator, inspector] = await Promise.all([createAccount('seller'), createAccount('buyer'), createAccount('admin'), createAccount('inspector')]);
@@ -25,9 +28,9 @@ describe('seller’s disclosure beside the findings', () => {
     machineId = await createMachine(seller.id, { maker: 'Halvorn', model: `HD-${Date.now().toString(36).toUpperCase()}`, supplyVoltage: 400, supplyPhases: 3 });
     const inspectionId = await createInspection(machineId, seller.id, 'in_review', inspector.id);
     // A heavily worn machine, so the findings have something to say against "no known faults".
+    // The report is released once the seller has answered (below): release keeps a copy of the answers.
     ({ reportId } = await createSubmittedSurvey(inspectionId, 1));
-    await db.transaction((tx) => releaseDraftReport(tx, { reportId, reviewerId: coordinator.id, sellerId: seller.id }));
-    await db.insert(reportAccessGrants).values({ reportId, userId: buyer.id, reason: 'purchase' });
+    coordinatorId = coordinator.id;
     const [row] = await db.select({ result: reports.result }).from(reports).where(eq(reports.id, reportId));
     result = (typeof row!.result === 'string' ? JSON.parse(row!.result) : row!.result) as ScoringResult;
     sellerBrowser = await openBrowser();
@@ -102,9 +105,20 @@ describe('seller’s disclosure beside the findings', () => {
     await page.close();
   });
 
-  it('shows the buyer the contradiction beside the claim', async () => {
+  it('shows the buyer the contradiction beside the claim, as kept at release', async () => {
     const faulty = result.checks.filter((c) => c.band === 'worn' || c.band === 'unfit');
     expect(faulty.length + result.safetyFindings.length).toBeGreaterThan(0);
+    await db.transaction((tx) => releaseDraftReport(tx, { reportId, reviewerId: coordinatorId, sellerId: seller.id }));
+    await db.insert(reportAccessGrants).values({ reportId, userId: buyer.id, reason: 'purchase' });
+
+    // The seller changes the answer after release; the released version keeps the one it was released with.
+    const sellerPage = await sellerBrowser.newPage();
+    await sellerPage.goto(`/machines/${machineId}/disclosure`);
+    await sellerPage.getByRole('group', { name: 'Do you know of any faults?' }).getByLabel('Yes').check();
+    await sellerPage.getByLabel(/Describe the faults/).fill('Worn ways near the chuck, changed after release');
+    await sellerPage.getByRole('button', { name: 'Save disclosure' }).click();
+    await sellerPage.waitForURL(`**/machines/${machineId}`);
+    await sellerPage.close();
 
     const page = await buyerBrowser.newPage();
     await signIn(page, buyer.email, buyer.password);
@@ -118,10 +132,22 @@ describe('seller’s disclosure beside the findings', () => {
     const first = faulty[0] ?? null;
     if (first) expect(text).toContain(`${first.label}: ${first.bandLabel}`);
     else expect(text).toContain(`Safety: ${result.safetyFindings[0]!.message}`);
+    expect(text).not.toContain('changed after release');
     // Answers no finding bears on are shown as stated, never marked true.
     expect(await page.locator('[data-claim="crashes"]').getAttribute('data-status')).toBe('not-compared');
     await claim.scrollIntoViewIfNeeded();
     await screenshot(page, 'report-claims-beside-findings');
+
+    // The signed PDF prints the same claim with its contradiction in words, and the landed cost on its own basis.
+    const response = await page.request.get(`/api/reports/${reportId}/pdf`);
+    expect(response.status()).toBe(200);
+    const pdf = pdfToText(await response.body());
+    expect(pdf).toContain('The seller’s claims beside the findings');
+    expect(pdf).toMatch(/Known faults No known faults .{0,40}Contradicted by the findings/);
+    if (first) expect(pdf).toContain(`${first.label}: ${pdfTextOf(first.bandLabel)}`);
+    expect(pdf).not.toContain('changed after release');
+    expect(pdf).toContain('Every copy of this report version prints the same figures');
+    expect(pdf).toMatch(/Missing tooling .{0,80}€550/);
     await page.close();
   });
 
