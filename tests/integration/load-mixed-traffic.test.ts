@@ -24,8 +24,8 @@ const SECONDS = Number(process.env.LOAD_SECONDS ?? 60);
 const RATE = Number(process.env.LOAD_RATE ?? 200);
 // 40 connections at 5 requests a second each: a connection keeps its rate while answers take < 200 ms.
 const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 40);
-// Honest on a two-core machine that also runs the database and the load generator (common practice
-// for an interactive web app: well under a second at the 99th percentile).
+// An interactive page or save answers within a second for 99 requests in 100, on the same two cores
+// that run the database and the load generator (common practice, no published source).
 const P99_BOUND_MS = 1_000;
 
 type Kind = 'dashboard page' | 'machines page' | 'report page' | 'comparison API' | 'survey autosave' | 'report PDF';
