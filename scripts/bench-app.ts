@@ -2,22 +2,24 @@
  * `npm run bench:app`: one table of the app's own performance figures beside their budgets.
  *
  * - Scoring: example surveys scored over and over (the full path the app takes on submit).
- * - Report PDF: the first render in a fresh process (cold), later renders, and a cached download.
+ * - Report PDF: the first render in a fresh process (cold), later renders, and a cached download
+ *   (budget: ≤ 20 ms).
  * - Photo: the photo pipeline on a 12-megapixel JPEG beside sharp's bare resize of the same file to
  *   the same three sizes (budget: pipeline ≤ 1.3 × bare); the bare resize to the display size alone
  *   is shown too.
  * - First-load JS of each main page, gzipped, from the build output (budget: survey page ≤ 170 KB).
  *
  * Needs a build (NEXT_DIST_DIR, default .next) and a database with at least one released report
- * (DATABASE_URL, default the `npm start` database with its demo data). Run with
+ * (DATABASE_URL, default the `npm start` database with its demo data). `--json` prints the rows as
+ * one JSON line instead of the table (for `npm run bench`), each with a stable key. Run with
  * node --import ./scripts/lib/allow-server-only.mjs --import tsx scripts/bench-app.ts (what
  * `npm run bench:app` does; not with the react-server condition, which breaks the PDF renderer).
  */
 import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import path from 'node:path';
-import { gzipSync } from 'node:zlib';
 import sharp from 'sharp';
+import { MAIN_PAGES, firstLoadJs } from './lib/first-load-js';
 import { LOCAL_STRIPE_SECRET_KEY, LOCAL_STRIPE_WEBHOOK_SECRET, NEXT_DIST_DIR, PROFILES, localUploadthingToken, root } from './lib/stack.mjs';
 
 process.env.TZ = 'UTC';
@@ -27,7 +29,11 @@ process.env.UPLOADTHING_TOKEN ??= localUploadthingToken();
 process.env.STRIPE_SECRET_KEY ??= LOCAL_STRIPE_SECRET_KEY;
 process.env.STRIPE_WEBHOOK_SECRET ??= LOCAL_STRIPE_WEBHOOK_SECRET;
 
-type Row = { what: string; figure: string; budget: string; verdict: 'ok' | 'OVER' | '' };
+/** key: stable name for other scripts; value: the figure as a number in unit, when it is one. */
+type Row = { key: string; what: string; figure: string; value?: number; unit?: string; budget: string; verdict: 'ok' | 'OVER' | '' };
+const AS_JSON = process.argv.includes('--json');
+// Issue #8: a report already rendered comes back from the cache in 20 ms or less.
+const CACHED_PDF_BUDGET_MS = 20;
 const rows: Row[] = [];
 const ms = (n: number) => `${n < 10 ? n.toFixed(2) : n.toFixed(0)} ms`;
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
@@ -51,7 +57,7 @@ async function scoring() {
     perSurvey.push(elapsed / (20 * surveys.length));
   }
   const m = median(perSurvey);
-  rows.push({ what: 'Scoring, per full survey (median)', figure: `${(m * 1000).toFixed(1)} µs (${Math.round(1000 / m).toLocaleString('en-GB')} /s)`, budget: '< 100 µs', verdict: m < 0.1 ? 'ok' : 'OVER' });
+  rows.push({ key: 'scoring', value: m * 1000, unit: 'µs', what: 'Scoring, per full survey (median)', figure: `${(m * 1000).toFixed(1)} µs (${Math.round(1000 / m).toLocaleString('en-GB')} /s)`, budget: '< 100 µs', verdict: m < 0.1 ? 'ok' : 'OVER' });
 }
 
 async function reportPdfs() {
@@ -63,7 +69,7 @@ async function reportPdfs() {
   try {
     const [report] = await db.select({ id: reports.id }).from(reports).where(eq(reports.status, 'released')).limit(1);
     if (!report) {
-      rows.push({ what: 'Report PDF', figure: 'no released report in the database', budget: '', verdict: '' });
+      rows.push({ key: 'pdf', what: 'Report PDF', figure: 'no released report in the database', budget: '', verdict: '' });
       return;
     }
     const dirs: string[] = [];
@@ -84,9 +90,9 @@ async function reportPdfs() {
       cached.push(elapsed);
     }
     for (const dir of dirs) rmSync(dir, { recursive: true, force: true });
-    rows.push({ what: `Report PDF, first render in a fresh process (${Math.round(first.pdf.byteLength / 1024)} KB)`, figure: ms(cold), budget: '', verdict: '' });
-    rows.push({ what: 'Report PDF, later render (median of 3)', figure: ms(median(warm)), budget: '', verdict: '' });
-    rows.push({ what: 'Report PDF, from the cache (median of 15)', figure: ms(median(cached)), budget: '< 50 ms', verdict: median(cached) < 50 ? 'ok' : 'OVER' });
+    rows.push({ key: 'pdf-cold', value: cold, unit: 'ms', what: `Report PDF, first render in a fresh process (${Math.round(first.pdf.byteLength / 1024)} KB)`, figure: ms(cold), budget: '', verdict: '' });
+    rows.push({ key: 'pdf-later', value: median(warm), unit: 'ms', what: 'Report PDF, later render (median of 3)', figure: ms(median(warm)), budget: '', verdict: '' });
+    rows.push({ key: 'pdf-cached', value: median(cached), unit: 'ms', what: 'Report PDF, from the cache (median of 15)', figure: ms(median(cached)), budget: `≤ ${CACHED_PDF_BUDGET_MS} ms`, verdict: median(cached) <= CACHED_PDF_BUDGET_MS ? 'ok' : 'OVER' });
   } finally {
     await closeDatabase();
   }
@@ -122,50 +128,31 @@ async function photos() {
   }
   const ratio = median(pipelineTimes) / median(bareTimes);
   const mp = `12 MP JPEG, ${(photo.byteLength / 1e6).toFixed(1)} MB`;
-  rows.push({ what: `Photo, sharp's bare resize to ${PHOTO_VARIANTS.display.longEdgePx} px only (${mp})`, figure: ms(median(displayTimes)), budget: '', verdict: '' });
-  rows.push({ what: `Photo, sharp's bare resize to the same 3 sizes (${sizes.map((v) => v.longEdgePx).join(', ')} px)`, figure: ms(median(bareTimes)), budget: '', verdict: '' });
-  rows.push({ what: 'Photo, Waygrade pipeline (check, upright, strip, 3 sizes)', figure: `${ms(median(pipelineTimes))} = ${ratio.toFixed(2)} × bare`, budget: '≤ 1.3 × bare', verdict: ratio <= 1.3 ? 'ok' : 'OVER' });
-}
-
-const PAGES: Array<{ label: string; route: string; budgetKb?: number }> = [
-  { label: 'Landing', route: '/page' },
-  { label: 'Sign in', route: '/(auth)/sign-in/page' },
-  { label: 'Overview', route: '/(backoffice)/dashboard/page' },
-  { label: 'Machine listing form', route: '/(backoffice)/machines/new/page' },
-  { label: 'Survey (phone)', route: '/(backoffice)/jobs/[inspectionId]/survey/page', budgetKb: 170 },
-  { label: 'Report', route: '/(backoffice)/reports/[id]/page' },
-  { label: 'Comparison table', route: '/(backoffice)/compare/page' },
-];
-
-/** The JavaScript a first visit to a page downloads: the framework's main files and every chunk the page's segments name. */
-function firstLoadJs(distDir: string, route: string) {
-  const serverDir = path.join(distDir, 'server', 'app', ...route.split('/').filter(Boolean));
-  const buildManifest = JSON.parse(readFileSync(path.join(serverDir, 'build-manifest.json'), 'utf8')) as { rootMainFiles: string[] };
-  const reference = readFileSync(`${serverDir}_client-reference-manifest.js`, 'utf8');
-  const entries = JSON.parse(reference.slice(reference.indexOf('= {') + 2).replace(/;\s*$/, '')) as { entryJSFiles: Record<string, string[]> };
-  const files = new Set([...buildManifest.rootMainFiles, ...Object.values(entries.entryJSFiles).flat()]);
-  let gzip = 0;
-  for (const file of files) gzip += gzipSync(readFileSync(path.join(distDir, file))).byteLength;
-  return { files: files.size, kb: gzip / 1024 };
+  rows.push({ key: 'photo-bare-display', value: median(displayTimes), unit: 'ms', what: `Photo, sharp's bare resize to ${PHOTO_VARIANTS.display.longEdgePx} px only (${mp})`, figure: ms(median(displayTimes)), budget: '', verdict: '' });
+  rows.push({ key: 'photo-bare', value: median(bareTimes), unit: 'ms', what: `Photo, sharp's bare resize to the same 3 sizes (${sizes.map((v) => v.longEdgePx).join(', ')} px)`, figure: ms(median(bareTimes)), budget: '', verdict: '' });
+  rows.push({ key: 'photo-pipeline', value: median(pipelineTimes), unit: 'ms', what: 'Photo, Waygrade pipeline (check, upright, strip, 3 sizes)', figure: `${ms(median(pipelineTimes))} = ${ratio.toFixed(2)} × bare`, budget: '≤ 1.3 × bare', verdict: ratio <= 1.3 ? 'ok' : 'OVER' });
 }
 
 function bundles() {
   const distDir = path.join(root, process.env.NEXT_DIST_DIR ?? NEXT_DIST_DIR);
   if (!existsSync(path.join(distDir, 'BUILD_ID'))) {
-    rows.push({ what: 'First-load JS', figure: `no build in ${path.relative(root, distDir)}; run npm start or next build first`, budget: '', verdict: '' });
+    rows.push({ key: 'js', what: 'First-load JS', figure: `no build in ${path.relative(root, distDir)}; run npm start or next build first`, budget: '', verdict: '' });
     return;
   }
-  for (const page of PAGES) {
+  for (const page of MAIN_PAGES) {
     try {
       const { files, kb } = firstLoadJs(distDir, page.route);
       rows.push({
-        what: `First-load JS, ${page.label} (${files} files, gzip)`,
+        key: `js:${page.route}`,
+        value: kb,
+        unit: 'KB',
+        what: `First-load JS, ${page.label} (${files.length} files, gzip)`,
         figure: `${kb.toFixed(1)} KB`,
         budget: page.budgetKb ? `≤ ${page.budgetKb} KB` : '',
         verdict: page.budgetKb ? (kb <= page.budgetKb ? 'ok' : 'OVER') : '',
       });
     } catch (error) {
-      rows.push({ what: `First-load JS, ${page.label}`, figure: `not in the build (${(error as Error).message.slice(0, 60)})`, budget: '', verdict: '' });
+      rows.push({ key: `js:${page.route}`, what: `First-load JS, ${page.label}`, figure: `not in the build (${(error as Error).message.slice(0, 60)})`, budget: '', verdict: '' });
     }
   }
 }
@@ -177,12 +164,16 @@ await photos();
 await reportPdfs();
 bundles();
 
-const widths = [Math.max(...rows.map((r) => r.what.length), 7), Math.max(...rows.map((r) => r.figure.length), 6), Math.max(...rows.map((r) => r.budget.length), 6)];
-const line = (cells: string[]) => `| ${cells.map((c, i) => c.padEnd(widths[i] ?? 4)).join(' | ')} |`;
-console.log(`\nWaygrade app benchmark · ${availableParallelism()} cores · load average ${loadBefore} before, ${load()} after (1/5/15 min)\n`);
-console.log(line(['Measure', 'Figure', 'Budget', 'ok?']));
-console.log(line(widths.map((w) => '-'.repeat(w)).concat('----')));
-for (const r of rows) console.log(line([r.what, r.figure, r.budget, r.verdict]));
 const over = rows.filter((r) => r.verdict === 'OVER');
-console.log(over.length ? `\n${over.length} over budget.` : '\nAll budgets met.');
 process.exitCode = over.length ? 1 : 0;
+if (AS_JSON) {
+  console.log(JSON.stringify({ cores: availableParallelism(), loadBefore, loadAfter: load(), rows }));
+} else {
+  const widths = [Math.max(...rows.map((r) => r.what.length), 7), Math.max(...rows.map((r) => r.figure.length), 6), Math.max(...rows.map((r) => r.budget.length), 6)];
+  const line = (cells: string[]) => `| ${cells.map((c, i) => c.padEnd(widths[i] ?? 4)).join(' | ')} |`;
+  console.log(`\nWaygrade app benchmark · ${availableParallelism()} cores · load average ${loadBefore} before, ${load()} after (1/5/15 min)\n`);
+  console.log(line(['Measure', 'Figure', 'Budget', 'ok?']));
+  console.log(line(widths.map((w) => '-'.repeat(w)).concat('----')));
+  for (const r of rows) console.log(line([r.what, r.figure, r.budget, r.verdict]));
+  console.log(over.length ? `\n${over.length} over budget.` : '\nAll budgets met.');
+}
