@@ -3,6 +3,7 @@ import { and, asc, desc, eq, gt, gte, inArray, isNull, like, lt, lte, or, sql, t
 import { buyerShopProfiles, comparisonEntries as e, reportAccessGrants, reports, reportSettings, shortlistItems, shortlists } from '@/db/schema';
 import type { Database } from '@/db/client';
 import type { ComparisonPage, ComparisonRow, LandedCostPart } from '@/lib/comparison/comparison-row';
+import { dealBreakersInWords } from '@/lib/comparison/deal-breaker-labels';
 import { landedCostAssumptions } from '@/lib/comparison/landed-cost-basis';
 import { CONVERTER_SIZING_FACTOR, DEMO_CONVERTER_COSTS, VOLTAGE_TOLERANCE, type SupplySpec } from '@/lib/decision/phase-converter';
 import { DEFAULT_VALIDITY_DAYS, reportCurrency } from '@/lib/decision/report-currency';
@@ -319,7 +320,7 @@ function toRow(raw: Record<string, unknown>, viewer: ComparisonViewer): Comparis
     landedCostNotKnown: notKnown,
     inclusionsValueMinor: nullableNumber(raw.inclusionsValueMinor),
     dealBreakerCount: Number(raw.dealBreakerCount),
-    dealBreakers: typeof raw.dealBreakers === 'string' && raw.dealBreakers !== '' ? raw.dealBreakers.split(',') : [],
+    dealBreakers: dealBreakersInWords(typeof raw.dealBreakers === 'string' && raw.dealBreakers !== '' ? raw.dealBreakers.split(',') : []),
     daysListed: Math.max(0, Math.floor(viewer.now.getTime() / DAY_MS) - Math.floor(listedAt.getTime() / DAY_MS)),
     inspectedOn: currency.inspectedOn,
     reportAgeDays: currency.ageDays,

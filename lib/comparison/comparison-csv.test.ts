@@ -30,7 +30,10 @@ const row = (overrides: Partial<ComparisonRow> = {}): ComparisonRow => ({
   landedCostNotKnown: ['phase converter'],
   inclusionsValueMinor: 43_000,
   dealBreakerCount: 2,
-  dealBreakers: ['crackedCasting', 'brokenGearTeeth'],
+  dealBreakers: [
+    { id: 'crackedCasting', label: 'Cracked casting (bed, headstock, apron or gearbox)' },
+    { id: 'brokenGearTeeth', label: 'Broken gear teeth' },
+  ],
   daysListed: 41,
   inspectedOn: '2026-02-20',
   reportAgeDays: 120,

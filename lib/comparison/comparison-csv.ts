@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import { DEAL_BREAKER_LABELS, LATHE_KIND_LABELS, type ComparisonRow } from './comparison-row';
+import { LATHE_KIND_LABELS, type ComparisonRow } from './comparison-row';
 import { SUBSYSTEM_TABLE, SUBSYSTEMS } from '@/lib/scoring/subsystems';
 import { SUBSYSTEM_KEYS } from '@/lib/validation/comparison-query';
 
@@ -36,7 +36,7 @@ const CSV_COLUMNS: ReadonlyArray<[header: string, value: (row: ComparisonRow) =>
   ['Landed cost parts not known', (r) => (r.hasDetails ? r.landedCostNotKnown.join('; ') : '')],
   ['Inclusions value', (r) => euros(r.inclusionsValueMinor)],
   ['Deal-breakers (count)', (r) => r.dealBreakerCount],
-  ['Deal-breakers', (r) => r.dealBreakers.map((id) => DEAL_BREAKER_LABELS[id] ?? id).join('; ')],
+  ['Deal-breakers', (r) => r.dealBreakers.map((d) => d.label).join('; ')],
   ['Days listed', (r) => r.daysListed],
   ['Inspected on (UTC)', (r) => r.inspectedOn],
   ['Report age (days)', (r) => r.reportAgeDays],

@@ -1,5 +1,4 @@
 import type { ConditionGrade } from '@/lib/scoring/grading/condition-scale';
-import { DEAL_BREAKER_ITEMS } from '@/lib/scoring';
 import type { SubsystemKey } from '@/lib/validation/comparison-query';
 
 /**
@@ -40,9 +39,9 @@ export type ComparisonRow = {
   landedCostNotKnown: LandedCostPart[];
   /** Inclusions at their condition's share of replacement cost; null without the report or when none are listed. */
   inclusionsValueMinor: number | null;
-  /** Deal-breakers the report records: the count for everyone, the ids (in words via DEAL_BREAKER_LABELS) with the report. */
+  /** Deal-breakers the report records: the count for everyone, each by id and in words with the report. */
   dealBreakerCount: number;
-  dealBreakers: string[];
+  dealBreakers: Array<{ id: string; label: string }>;
   /** Whole UTC days since the listing went up. */
   daysListed: number;
   /** Day of the inspection, its age in whole UTC days, the last day the report is current and whether it is past it. */
@@ -55,9 +54,6 @@ export type ComparisonRow = {
 
 export const LANDED_COST_PARTS = ['asking price', 'rigging', 'phase converter', 'missing tooling', 'repairs'] as const;
 export type LandedCostPart = (typeof LANDED_COST_PARTS)[number];
-
-/** Deal-breakers in words, by the scoring result's id. */
-export const DEAL_BREAKER_LABELS: Readonly<Record<string, string>> = Object.fromEntries(DEAL_BREAKER_ITEMS.map((item) => [item.id, item.label]));
 
 /** `landedCostBasis`: what this reader's landed-cost figures assume, in words (landed-cost-basis.ts). */
 export type ComparisonPage = { rows: ComparisonRow[]; total: number; page: number; pageSize: number; landedCostBasis: string };

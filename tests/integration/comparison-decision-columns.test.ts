@@ -324,9 +324,12 @@ describe('the comparison table’s decision columns', () => {
         ]),
       );
       const full = await rows(adminNoShop);
-      expect(full.find((r) => r.model === 'P2-single-phase')!.dealBreakers).toEqual(['crackedCasting', 'brokenGearTeeth']);
+      expect(full.find((r) => r.model === 'P2-single-phase')!.dealBreakers).toEqual([
+        { id: 'crackedCasting', label: 'Cracked casting (bed, headstock, apron or gearbox)' },
+        { id: 'brokenGearTeeth', label: 'Broken gear teeth' },
+      ]);
       await db.insert(reportAccessGrants).values({ reportId: made.get('P3-heavy-stale')!.reportId, userId: dealer.id, reason: 'purchase' });
-      expect((await rows(dealer)).find((r) => r.model === 'P3-heavy-stale')!.dealBreakers).toEqual(['growlingSpindleBearings']);
+      expect((await rows(dealer)).find((r) => r.model === 'P3-heavy-stale')!.dealBreakers.map((d) => d.label)).toEqual(['Growling spindle bearings']);
     });
 
     it('filters "none" and "any" and sorts by the count', async () => {

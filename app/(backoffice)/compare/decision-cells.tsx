@@ -1,6 +1,6 @@
 'use client';
 
-import { dayCount, DEAL_BREAKER_LABELS, type ComparisonRow } from '@/lib/comparison/comparison-row';
+import { dayCount, type ComparisonRow } from '@/lib/comparison/comparison-row';
 import { formatDate, formatMoney } from '@/lib/format';
 
 const day = (iso: string) => formatDate(new Date(`${iso}T00:00:00Z`));
@@ -29,8 +29,8 @@ export function DealBreakersCell({ row }: { row: ComparisonRow }) {
       </span>
       {row.dealBreakers.length ? (
         <ul className="text-ink">
-          {row.dealBreakers.map((id) => (
-            <li key={id}>{DEAL_BREAKER_LABELS[id] ?? id}</li>
+          {row.dealBreakers.map((d) => (
+            <li key={d.id}>{d.label}</li>
           ))}
         </ul>
       ) : (

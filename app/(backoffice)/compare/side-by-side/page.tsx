@@ -9,7 +9,8 @@ import { loadComparisonViewer } from '@/db/queries/comparison';
 import { loadComparableSalesByIds, loadComparisonEntries, loadReportResults, type ComparisonEntry } from '@/db/queries/side-by-side';
 import { requirePagePermission } from '@/lib/auth/session';
 import { comparablesUsed } from '@/lib/comparison/comparables-used';
-import { dayCount, DEAL_BREAKER_LABELS, LATHE_KIND_LABELS } from '@/lib/comparison/comparison-row';
+import { dayCount, LATHE_KIND_LABELS } from '@/lib/comparison/comparison-row';
+import { dealBreakersInWords } from '@/lib/comparison/deal-breaker-labels';
 import { converterMinorFor, landedCostAssumptions } from '@/lib/comparison/landed-cost-basis';
 import { daysOnMarket, reportCurrency } from '@/lib/decision/report-currency';
 import type { SupplySpec } from '@/lib/decision/phase-converter';
@@ -41,7 +42,7 @@ function DealBreakers({ e, details }: { e: ComparisonEntry; details: boolean }) 
         {e.dealBreakerCount} deal-breaker{e.dealBreakerCount === 1 ? '' : 's'}
       </span>
       {details ? (
-        <span className="text-sm">{e.dealBreakers.split(',').map((id) => DEAL_BREAKER_LABELS[id] ?? id).join('; ')}</span>
+        <span className="text-sm">{dealBreakersInWords(e.dealBreakers.split(',')).map((d) => d.label).join('; ')}</span>
       ) : (
         <span className="text-sm text-ink-faint">named in the report</span>
       )}
