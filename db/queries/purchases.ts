@@ -106,8 +106,10 @@ export async function listOrdersForAdmin(filter: { status?: OrderStatus; limit?:
  * when read inside a transaction, so two deliveries of related events cannot interleave.
  */
 export async function lockOrderWithContext(tx: Reader, orderId: number) {
-  // Only the order row is locked; the joined rows are read as they are.
-  const [locked] = await tx.select({ id: orders.id }).from(orders).where(eq(orders.id, orderId)).for('update');
+  // Only the order row is locked; the joined rows are read as they are. The order itself comes from
+  // the locking read, which sees the latest commit: a plain read could return the snapshot taken
+  // before the lock wait and miss a refund that committed meanwhile.
+  const [locked] = await tx.select().from(orders).where(eq(orders.id, orderId)).for('update');
   if (!locked) return null;
   const [row] = await tx
     .select({
@@ -122,7 +124,7 @@ export async function lockOrderWithContext(tx: Reader, orderId: number) {
     .innerJoin(machines, eq(machines.id, reports.machineId))
     .where(eq(orders.id, orderId))
     .limit(1);
-  return row ?? null;
+  return row ? { ...row, order: locked } : null;
 }
 
 export type OrderWithContext = NonNullable<Awaited<ReturnType<typeof lockOrderWithContext>>>;

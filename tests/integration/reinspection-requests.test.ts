@@ -150,6 +150,7 @@ describe('a re-inspection request', () => {
     await new Promise((resolve) => setTimeout(resolve, 1500));
     expect(await refundEventsAtStandIn(order.providerPaymentIntentId!)).toHaveLength(1);
     expect(await queuedMails(request.buyer.email, 'refund')).toHaveLength(1);
+    expect(await readOrderOf(request.requestId)).toMatchObject({ status: 'refunded', refundReason: REINSPECTION_CANCEL_REASONS.sold });
   });
 
   it('refunds nothing automatically when the machine sells after the visit has started', async () => {
