@@ -182,7 +182,7 @@ export default async function ReportSummaryPage({
       </div>
       {facts && showsFindings ? (
         <DisclosurePanel
-          assessments={disclosure ? assessDisclosure(disclosure, facts.result, facts.nameplate) : null}
+          assessments={disclosure ? assessDisclosure(disclosure, facts.result, kept?.landedCostBasis.nameplate ?? null) : null}
           answeredOn={disclosure ? new Date(disclosure.answeredAt) : null}
           keptWithVersion={kept !== null}
         />
