@@ -1,7 +1,7 @@
 import 'server-only';
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { db } from '@/db/client';
+import { db, primaryOf } from '@/db/client';
 import { users } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
 import type { Role } from '@/lib/roles';
@@ -38,7 +38,8 @@ export async function authenticate(raw: unknown, meta: { ip: string | null; now?
   const subjects = subjectsFor('sign-in', email, meta.ip);
 
   const blocked = await isRateLimited(subjects, now);
-  const [user] = await db.select().from(users).where(eq(users.email, email)).limit(1);
+  // The primary: a password just changed or an account just deactivated must count at once.
+  const [user] = await primaryOf(db).select().from(users).where(eq(users.email, email)).limit(1);
   const passwordMatches = await verifyPassword(password, user?.passwordHash);
 
   if (blocked) {

@@ -1,6 +1,6 @@
 import 'server-only';
 import { inArray, sql } from 'drizzle-orm';
-import { db } from '@/db/client';
+import { db, primaryOf } from '@/db/client';
 import { rateLimitBuckets } from '@/db/schema';
 
 /**
@@ -32,7 +32,8 @@ function bucketKey(subject: RateLimitSubject) {
 /** True when any of the subjects is blocked at `now`. */
 export async function isRateLimited(subjects: RateLimitSubject[], now = new Date()): Promise<boolean> {
   if (subjects.length === 0) return false;
-  const rows = await db
+  // The primary: attempts are counted there a moment ago, and a lagging replica would let a burst through.
+  const rows = await primaryOf(db)
     .select({ blockedUntil: rateLimitBuckets.blockedUntil })
     .from(rateLimitBuckets)
     .where(inArray(rateLimitBuckets.bucketKey, subjects.map(bucketKey)));

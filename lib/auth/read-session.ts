@@ -3,7 +3,7 @@ import { cache } from 'react';
 import { cookies } from 'next/headers';
 import { decode, getToken, type JWT } from 'next-auth/jwt';
 import { eq } from 'drizzle-orm';
-import { db } from '@/db/client';
+import { db, primaryOf } from '@/db/client';
 import { users } from '@/db/schema';
 import { env } from '@/lib/env';
 import { toAppError } from '@/lib/errors';
@@ -18,7 +18,8 @@ export function usesSecureCookies() {
 
 /** The account behind a session, or null when it is gone or deactivated. */
 export async function findActiveAccount(id: string) {
-  const [row] = await db
+  // The primary, not a replica: deactivation and a new session version must end a session at once.
+  const [row] = await primaryOf(db)
     .select({ id: users.id, role: users.role, sessionVersion: users.sessionVersion, deactivatedAt: users.deactivatedAt, name: users.name, email: users.email })
     .from(users)
     .where(eq(users.id, id))

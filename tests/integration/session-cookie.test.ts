@@ -9,7 +9,7 @@ import { createAccount } from '@/tests/support/accounts';
 // the door only while it is genuine, unexpired and its account still active at the same session version.
 const APP_URL = process.env.APP_URL!;
 const COOKIE = 'authjs.session-token';
-const TABLE = '/api/compare?page=1&pageSize=5';
+const TABLE = '/api/compare?page=1&pageSize=25';
 
 async function cookieFor(account: { id: string; role: string }, options: { secret?: string; maxAge?: number; sessionVersion?: number } = {}) {
   const value = await encode({
