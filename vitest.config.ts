@@ -39,6 +39,19 @@ export default defineConfig({
       {
         extends: true,
         test: {
+          // Sixty seconds at a fixed request rate against the built app: `npm run test:load`, not part of `npm test`.
+          name: 'load',
+          include: ['tests/load/**/*.test.ts'],
+          server: { deps: { inline: ['next-auth', '@auth/core'] } },
+          environment: 'node',
+          fileParallelism: false,
+          testTimeout: 300_000,
+          hookTimeout: 120_000,
+        },
+      },
+      {
+        extends: true,
+        test: {
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],
           environment: 'node',

@@ -7,6 +7,9 @@ import { run, waitForHttp } from './lib/processes.mjs';
 import { ensureDebianPackage } from './lib/debian-package.mjs';
 
 const startedAt = Date.now();
+// `npm run test:load` (--load): the same stack and build, then only the load test, which is too heavy
+// for the two cores every `npm test` run shares with the database and the browser.
+const LOAD_ONLY = process.argv.includes('--load');
 const checks = [];
 let stack;
 
@@ -38,8 +41,10 @@ try {
 
   await run(process.execPath, ['--conditions=react-server', '--import', 'tsx', 'db/seed/index.ts'], { cwd: root, env });
 
-  await check('type check', process.execPath, ['node_modules/typescript/bin/tsc', '--noEmit', '-p', '.'], env);
-  await check('lint', process.execPath, ['node_modules/eslint/bin/eslint.js', '.', '--max-warnings=0'], env);
+  if (!LOAD_ONLY) {
+    await check('type check', process.execPath, ['node_modules/typescript/bin/tsc', '--noEmit', '-p', '.'], env);
+    await check('lint', process.execPath, ['node_modules/eslint/bin/eslint.js', '.', '--max-warnings=0'], env);
+  }
 
   await buildApp({ ...env, NODE_ENV: 'production' });
   const app = startApp(stack.group, env, stack.ports.app);
@@ -50,7 +55,7 @@ try {
   mkdirSync(resultsDir, { recursive: true });
   // One project at a time: on two cores, browser tests beside CPU-heavy property tests starve both.
   const tests = { passed: 0, failed: 0 };
-  for (const project of ['unit', 'integration', 'e2e']) {
+  for (const project of LOAD_ONLY ? ['load'] : ['unit', 'integration', 'e2e']) {
     console.log(`\n── ${project} tests ──`);
     const resultsFile = path.join(resultsDir, `vitest-${project}.json`);
     await run(

@@ -9,7 +9,7 @@ import nearNew from '@/lib/scoring/examples/near-new.json';
 import { createAccount } from '../support/accounts';
 import { sessionCookie } from '../support/private-stack';
 import { createReleasedReport } from '../support/purchase-fixtures';
-import { bookedInspection } from './survey-fixtures';
+import { bookedInspection } from '../integration/survey-fixtures';
 
 /**
  * Sixty seconds of mixed traffic at a fixed 200 requests a second on loopback, against the app the
