@@ -257,13 +257,25 @@ function rowColumns(details: Details) {
   };
 }
 
+/**
+ * "No deal-breakers" matches most machines (93 % of the benchmark's lathes), so its index narrows a
+ * page little: left to itself the optimiser reads it and sorts thousands of rows, where reading the
+ * sort column's index in order stops at the page (bare page query 8 ms → 0.5 ms for "no
+ * deal-breakers, inspected in the last year, fewest days listed"). The count keeps the index: it
+ * answers that count from the index alone.
+ */
+function pageIndexHint(query: Pick<ComparisonQuery, 'dealBreakers' | 'sort'>) {
+  return query.dealBreakers === 'none' && query.sort !== 'dealBreakers' ? { ignoreIndex: DEAL_BREAKERS_INDEX } : undefined;
+}
+const DEAL_BREAKERS_INDEX = 'comparison_entries_deal_breakers_inspected_idx';
+
 /** The page query and the count query, unexecuted: the API runs them; the benchmark also runs their SQL bare. */
 export function buildComparisonQueries(reader: Reader, query: ComparisonQuery, viewer: ComparisonViewer) {
   const details = detailExpressions(viewer);
   const where = whereFor(query, details, viewer);
   const page = reader
     .select(rowColumns(details))
-    .from(e)
+    .from(e, pageIndexHint(query))
     .where(where)
     .orderBy(...orderFor(query, details))
     .limit(query.pageSize)
@@ -346,7 +358,7 @@ export async function listComparisonRowsForExport(reader: Reader, query: Compari
   const details = detailExpressions(viewer);
   const rows = await reader
     .select(rowColumns(details))
-    .from(e)
+    .from(e, pageIndexHint(query))
     .where(whereFor(query, details, viewer))
     .orderBy(...orderFor(query, details))
     .limit(MAX_EXPORT_ROWS + 1);
