@@ -37,7 +37,9 @@ function expectClearAnswer(answer: Answer, what: string) {
 const pathSegment = fc.oneof(
   fc.integer({ min: -5, max: 2 ** 40 }).map(String),
   fc.constantFrom('0', '-1', '1e3', '0x10', 'NaN', 'null', '%00', '..%2F..', '%27%20OR%201%3D1', '9'.repeat(40), '1.5'),
-  fc.string({ minLength: 1, maxLength: 20 }).map(encodeURIComponent),
+  // A bare "." or ".." segment is resolved by the client's URL parser before anything is sent
+  // (it would test fetch, not the app), so those two are left out.
+  fc.string({ minLength: 1, maxLength: 20 }).filter((s) => s !== '.' && s !== '..').map(encodeURIComponent),
 );
 
 const body = fc.oneof(
