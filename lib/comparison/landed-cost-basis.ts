@@ -1,6 +1,6 @@
 import { landedCost, type LandedCost } from '@/lib/decision/landed-cost';
 import { assessSupply, DEMO_CONVERTER_COSTS, CONVERTER_SIZING_FACTOR, type NameplateSupply, type SupplySpec } from '@/lib/decision/phase-converter';
-import { DEMO_RIGGING_RATES, estimateRigging, type SiteAccess } from '@/lib/decision/rigging-estimate';
+import { DEMO_RIGGING_RATES, estimateRigging, STARTING_RIGGING_DISTANCE_KM, type SiteAccess } from '@/lib/decision/rigging-estimate';
 
 /**
  * How the comparison table prices a machine standing in the reader's shop. The table cannot ask each
@@ -10,7 +10,7 @@ import { DEMO_RIGGING_RATES, estimateRigging, type SiteAccess } from '@/lib/deci
  * for (their profile; left out while they have not given it). The report page lets the reader change
  * each of these for one machine.
  */
-export const TABLE_RIGGING_DISTANCE_KM = 100;
+export const TABLE_RIGGING_DISTANCE_KM = STARTING_RIGGING_DISTANCE_KM;
 
 /** What the table's landed-cost figure is made of, for the column's tooltip and the legend under the table. */
 export function landedCostAssumptions(shop: SupplySpec | null): string {

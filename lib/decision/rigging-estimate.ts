@@ -27,6 +27,13 @@ export interface RiggingRates {
   accessFactor: Record<SiteAccess, number>;
 }
 
+/**
+ * The distance a landed cost starts from where the buyer has not given theirs: the report page's
+ * starting value, the comparison table's figure and the signed PDF's example all use it, so the three
+ * agree. A round figure of our own (common practice, no source).
+ */
+export const STARTING_RIGGING_DISTANCE_KM = 100;
+
 /** Invented demo figures, not a quotation from any firm. */
 export const DEMO_RIGGING_RATES: RiggingRates = {
   currency: 'EUR',

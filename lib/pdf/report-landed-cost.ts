@@ -3,7 +3,7 @@ import type { ScoringResult } from '@/lib/scoring';
 import { landedCost, type LandedCost } from '@/lib/decision/landed-cost';
 import { assessSupply } from '@/lib/decision/phase-converter';
 import type { ReleaseFacts } from '@/lib/decision/release-facts';
-import { DEMO_RIGGING_RATES, estimateRigging, SITE_ACCESS_LABELS, type RiggingEstimate } from '@/lib/decision/rigging-estimate';
+import { DEMO_RIGGING_RATES, estimateRigging, SITE_ACCESS_LABELS, STARTING_RIGGING_DISTANCE_KM, type RiggingEstimate } from '@/lib/decision/rigging-estimate';
 
 /**
  * The landed cost as the signed PDF prints it. A released version's PDF is one file for every
@@ -12,7 +12,7 @@ import { DEMO_RIGGING_RATES, estimateRigging, SITE_ACCESS_LABELS, type RiggingEs
  */
 export const REPORT_LANDED_COST_BASIS = {
   /** A round distance for the example move; the buyer's own is on the report page. */
-  distanceKm: 100,
+  distanceKm: STARTING_RIGGING_DISTANCE_KM,
   rates: DEMO_RIGGING_RATES,
   /** A private sale: no premium, and any tax reclaimable by a business buyer. */
   buyersPremiumPercent: null,

@@ -6,7 +6,7 @@ import { INPUT_CLASS } from '@/components/forms/field';
 import { DecisionInputError } from '@/lib/decision/decision-input-error';
 import { landedCost } from '@/lib/decision/landed-cost';
 import type { SupplyAssessment } from '@/lib/decision/phase-converter';
-import { DEMO_RIGGING_RATES, estimateRigging, SITE_ACCESS, SITE_ACCESS_LABELS, type SiteAccess } from '@/lib/decision/rigging-estimate';
+import { DEMO_RIGGING_RATES, estimateRigging, SITE_ACCESS, SITE_ACCESS_LABELS, STARTING_RIGGING_DISTANCE_KM, type SiteAccess } from '@/lib/decision/rigging-estimate';
 import { formatMoney } from '@/lib/format';
 
 export interface LandedCostFacts {
@@ -48,7 +48,7 @@ function NumberInput({ id, label, value, onChange, unit }: { id: string; label: 
  */
 export function LandedCostPanel({ facts }: { facts: LandedCostFacts }) {
   const c = facts.currency;
-  const [distance, setDistance] = useState('100');
+  const [distance, setDistance] = useState(String(STARTING_RIGGING_DISTANCE_KM));
   const [weight, setWeight] = useState(facts.weightKg === null ? '' : String(facts.weightKg));
   const [access, setAccess] = useState<SiteAccess>(facts.siteAccess);
   const [callOut, setCallOut] = useState(String(DEMO_RIGGING_RATES.callOutMinor / 100));
