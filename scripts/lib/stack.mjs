@@ -183,8 +183,9 @@ export async function buildApp(env) {
   await run(node, ['node_modules/next/dist/bin/next', 'build'], { cwd: root, env });
 }
 
+/** The built app, one Next.js server per core (scripts/app-server.mjs). */
 export function startApp(group, env, port) {
-  return group.start('app', node, ['node_modules/next/dist/bin/next', 'start', '-p', String(port), '-H', '0.0.0.0'], {
+  return group.start('app', node, ['scripts/app-server.mjs'], {
     cwd: root,
     env: { ...env, NODE_ENV: 'production', PORT: String(port) },
   });
