@@ -12,6 +12,10 @@ const hostname = process.env.HOSTNAME_BIND ?? '0.0.0.0';
 const workers = Math.max(1, Number(process.env.APP_WORKERS) || availableParallelism());
 
 if (cluster.isPrimary) {
+  // APP_WORKER_FLAGS adds Node flags to the workers only, e.g. "--cpu-prof --cpu-prof-dir=tmp/prof" to profile them
+  // (flags NODE_OPTIONS refuses).
+  const workerFlags = (process.env.APP_WORKER_FLAGS ?? '').split(' ').filter(Boolean);
+  if (workerFlags.length) cluster.setupPrimary({ execArgv: [...process.execArgv, ...workerFlags] });
   let stopping = false;
   const fork = () => cluster.fork();
   for (let i = 0; i < workers; i += 1) fork();

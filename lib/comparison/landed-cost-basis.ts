@@ -12,8 +12,22 @@ import { DEMO_RIGGING_RATES, estimateRigging, STARTING_RIGGING_DISTANCE_KM, type
  */
 export const TABLE_RIGGING_DISTANCE_KM = STARTING_RIGGING_DISTANCE_KM;
 
+/** The text by shop supply: it is sent with every page, and formatting its money is not free. */
+const assumptionsBySupply = new Map<string, string>();
+
 /** What the table's landed-cost figure is made of, for the column's tooltip and the legend under the table. */
 export function landedCostAssumptions(shop: SupplySpec | null): string {
+  const key = shop ? `${shop.voltage}/${shop.phases}` : 'none';
+  let text = assumptionsBySupply.get(key);
+  if (text === undefined) {
+    text = describeLandedCost(shop);
+    // Supplies are few in practice; the bound only keeps an odd one from growing the map.
+    if (assumptionsBySupply.size < 1_000) assumptionsBySupply.set(key, text);
+  }
+  return text;
+}
+
+function describeLandedCost(shop: SupplySpec | null): string {
   const rates = DEMO_RIGGING_RATES;
   const money = (minor: number) => `€${(minor / 100).toLocaleString('en-GB', { maximumFractionDigits: 2 })}`;
   const converter = shop

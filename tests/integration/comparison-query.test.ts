@@ -8,7 +8,11 @@ import { count, eq } from 'drizzle-orm';
 import { NextRequest } from 'next/server';
 import Papa from 'papaparse';
 import { closeDatabase, db } from '@/db/client';
+import { drizzle } from 'drizzle-orm/mysql2';
+import mysql from 'mysql2/promise';
+import * as schema from '@/db/schema';
 import { comparisonEntries, machines, reportAccessGrants, reports } from '@/db/schema';
+import { loadComparisonViewer } from '@/db/queries/comparison';
 import { releaseDraftReport } from '@/db/queries/report-writes';
 import type { Actor } from '@/lib/auth/operation';
 import type { ComparisonPage } from '@/lib/comparison/comparison-row';
@@ -171,6 +175,8 @@ describe('the comparison table API', () => {
       const beyond = await list(dealer, { ...mine(), page: '2', pageSize: '25' });
       if (!beyond.body.ok) throw new Error('refused');
       expect(beyond.body.data.rows).toEqual([]);
+      // Past the last row the page carries no count of its own: the total is still told.
+      expect(beyond.body.data.total).toBe(PLAN.length);
     });
   });
 
@@ -195,6 +201,22 @@ describe('the comparison table API', () => {
       const valued = await list(otherDealer, mine({ valueMin: '0' }));
       if (!valued.body.ok) throw new Error('refused');
       expect(valued.body.data.rows.map((r) => r.model)).toEqual(['B-330']);
+    });
+
+    it('reads every grant again when the server cuts the grant list short', async () => {
+      // GROUP_CONCAT stops at group_concat_max_len; a cut list must never be read as shorter ids.
+      const connection = await mysql.createConnection({ uri: process.env.DATABASE_URL!, timezone: 'Z' });
+      try {
+        await connection.query('SET SESSION group_concat_max_len = 4');
+        const tight = drizzle(connection, { schema, mode: 'default' });
+        for (const m of made.slice(2)) await db.insert(reportAccessGrants).values({ reportId: m.reportId, userId: otherDealer.id, reason: 'purchase' });
+        const viewer = await loadComparisonViewer(tight, { id: otherDealer.id, role: 'dealer' });
+        const wanted = [made[1]!, ...made.slice(2)].map((m) => m.inspectionId).sort((a, b) => a - b);
+        expect(viewer.visibility).toEqual({ all: false, inspectionIds: expect.arrayContaining(wanted) });
+        expect(viewer.visibility.all ? [] : [...viewer.visibility.inspectionIds].sort((a, b) => a - b)).toEqual(wanted);
+      } finally {
+        await connection.end();
+      }
     });
 
     it('shows coordinators every figure', async () => {
