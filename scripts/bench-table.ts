@@ -97,7 +97,7 @@ const processesModule: string = './lib/processes.mjs';
 const { bringUp, buildApp, startApp, root, NEXT_DIST_DIR } = (await import(stackModule)) as StackHelpers;
 const { run, waitForHttp } = (await import(processesModule)) as ProcessHelpers;
 const { db, closeDatabase } = await import('../db/client');
-const { buildComparisonQueries, loadComparisonViewer } = await import('../db/queries/comparison');
+const { comparisonPageSql, loadComparisonViewer } = await import('../db/queries/comparison');
 const { comparisonEntries, users } = await import('../db/schema');
 const { comparisonQuerySchema } = await import('../lib/validation/comparison-query');
 const { count, eq } = await import('drizzle-orm');
@@ -192,8 +192,7 @@ async function main() {
       // The statements behind this page for this dealer, from the one query builder.
       const query = comparisonQuerySchema.parse(scenario.query);
       // The page query carries its count as a subquery: one statement, as the API sends it.
-      const { page } = buildComparisonQueries(db, query, viewer);
-      const statements = [page.toSQL()];
+      const statements = [comparisonPageSql(db, query, viewer)];
       const explainer = await mysql.createConnection({ uri: BENCH_DATABASE_URL, timezone: 'Z' });
       console.log(`\n── ${scenario.name} ──`);
       const [plan] = await explainer.query(`EXPLAIN ${statements[0]!.sql}`, statements[0]!.params);
