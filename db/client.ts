@@ -64,6 +64,21 @@ export function primaryOf<T>(reader: T): T {
   return (reader === (db as unknown) ? instance().primary : reader) as T;
 }
 
+/**
+ * A value kept for each database a reader stands for (the shared `db` counts as the pools behind it,
+ * which closeDatabase replaces; a transaction counts as itself), such as statements prepared on it:
+ * a prepared statement keeps its SQL text and the pool it runs on, and is only given new values.
+ */
+export function perDatabase<R extends object, V>(create: (reader: R) => V): (reader: R) => V {
+  const values = new WeakMap<object, V>();
+  return (reader) => {
+    const key = reader === (db as unknown) ? instance().db : reader;
+    let value = values.get(key);
+    if (value === undefined) values.set(key, (value = create(reader)));
+    return value;
+  };
+}
+
 export async function closeDatabase() {
   const existing = globalForDb.waygradeDb;
   globalForDb.waygradeDb = undefined;

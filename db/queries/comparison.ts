@@ -1,7 +1,7 @@
 import 'server-only';
 import { and, asc, desc, eq, fillPlaceholders, gt, gte, inArray, isNull, like, lt, lte, or, sql, type AnyColumn, type SQL, type SQLWrapper } from 'drizzle-orm';
 import { buyerShopProfiles, comparisonEntries as e, reportAccessGrants, reports, reportSettings, shortlistItems, shortlists } from '@/db/schema';
-import type { Database } from '@/db/client';
+import { perDatabase, type Database } from '@/db/client';
 import type { ComparisonPage, ComparisonRow, LandedCostPart } from '@/lib/comparison/comparison-row';
 import { dealBreakersInWords } from '@/lib/comparison/deal-breaker-labels';
 import { landedCostAssumptions } from '@/lib/comparison/landed-cost-basis';
@@ -44,6 +44,23 @@ function parseIdList(list: string | null, expected: number): number[] | null {
   return ids.length === expected && ids.every(Number.isSafeInteger) ? ids : null;
 }
 
+/** The viewer's settings, and for anyone but coordinators their grants; prepared once per database. */
+function viewerStatement(reader: Reader, withGrants: boolean) {
+  const readerId = sql.placeholder('reader');
+  const granted = sql`from ${reportAccessGrants} inner join ${reports} on ${reports.id} = ${reportAccessGrants.reportId} where ${reportAccessGrants.userId} = ${readerId} and ${reportAccessGrants.revokedAt} is null`;
+  return reader
+    .select({
+      validityDays: sql<number | null>`(select ${reportSettings.validityDays} from ${reportSettings} where ${reportSettings.id} = 1)`.mapWith(Number),
+      supplyVoltage: sql<number | null>`(select ${buyerShopProfiles.supplyVoltage} from ${buyerShopProfiles} where ${buyerShopProfiles.userId} = ${readerId})`,
+      supplyPhases: sql<number | null>`(select ${buyerShopProfiles.supplyPhases} from ${buyerShopProfiles} where ${buyerShopProfiles.userId} = ${readerId})`,
+      grantedIds: withGrants ? sql<string | null>`(select group_concat(distinct ${reports.inspectionId}) ${granted})` : sql<string | null>`null`,
+      grantedCount: withGrants ? sql<number>`(select count(distinct ${reports.inspectionId}) ${granted})`.mapWith(Number) : sql<number>`0`.mapWith(Number),
+    })
+    .from(sql`(select 1) as one`)
+    .prepare();
+}
+const viewerStatements = perDatabase((reader: Reader) => ({ seesAll: viewerStatement(reader, false), granted: viewerStatement(reader, true) }));
+
 /**
  * The reader's settings and grants in one round trip (the table asks for them on every page): the
  * two single-row settings and the granted inspections as a GROUP_CONCAT list with its count beside
@@ -51,16 +68,7 @@ function parseIdList(list: string | null, expected: number): number[] | null {
  */
 export async function loadComparisonViewer(reader: Reader, actor: { id: string; role: string }, now = new Date()): Promise<ComparisonViewer> {
   const seesAll = actor.role === 'admin';
-  const granted = sql`from ${reportAccessGrants} inner join ${reports} on ${reports.id} = ${reportAccessGrants.reportId} where ${reportAccessGrants.userId} = ${actor.id} and ${reportAccessGrants.revokedAt} is null`;
-  const [row] = await reader
-    .select({
-      validityDays: sql<number | null>`(select ${reportSettings.validityDays} from ${reportSettings} where ${reportSettings.id} = 1)`.mapWith(Number),
-      supplyVoltage: sql<number | null>`(select ${buyerShopProfiles.supplyVoltage} from ${buyerShopProfiles} where ${buyerShopProfiles.userId} = ${actor.id})`,
-      supplyPhases: sql<number | null>`(select ${buyerShopProfiles.supplyPhases} from ${buyerShopProfiles} where ${buyerShopProfiles.userId} = ${actor.id})`,
-      grantedIds: seesAll ? sql<string | null>`null` : sql<string | null>`(select group_concat(distinct ${reports.inspectionId}) ${granted})`,
-      grantedCount: seesAll ? sql<number>`0` : sql<number>`(select count(distinct ${reports.inspectionId}) ${granted})`.mapWith(Number),
-    })
-    .from(sql`(select 1) as one`);
+  const [row] = await viewerStatements(reader)[seesAll ? 'seesAll' : 'granted'].execute({ reader: actor.id });
   let visibility: DetailVisibility = { all: true };
   if (!seesAll) {
     const listed = parseIdList(row?.grantedIds ?? null, row?.grantedCount ?? 0);
@@ -417,12 +425,11 @@ type PreparedPage = ReturnType<ReturnType<typeof pageStatement>['prepare']>;
  * a prepared one keeps its text and only takes new values. A shape stays on the connection pool it
  * was first prepared on: with read replicas, one replica per shape and process rather than per request.
  */
-const preparedPages = new WeakMap<Reader, Map<string, PreparedPage>>();
+const preparedPages = perDatabase(() => new Map<string, PreparedPage>());
 const PREPARED_SHAPES_KEPT = 500;
 
 function preparedPage(reader: Reader, query: ComparisonQuery, viewer: ComparisonViewer, parts: ReturnType<typeof statementParts>): PreparedPage {
-  let byShape = preparedPages.get(reader);
-  if (!byShape) preparedPages.set(reader, (byShape = new Map()));
+  const byShape = preparedPages(reader);
   const shape = statementShape(query, viewer, parts.b);
   let prepared = byShape.get(shape);
   if (!prepared) {

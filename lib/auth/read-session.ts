@@ -2,8 +2,8 @@ import 'server-only';
 import { cache } from 'react';
 import { cookies } from 'next/headers';
 import { decode, getToken, type JWT } from 'next-auth/jwt';
-import { eq } from 'drizzle-orm';
-import { db, primaryOf } from '@/db/client';
+import { eq, sql } from 'drizzle-orm';
+import { db, perDatabase, primaryOf } from '@/db/client';
 import { users } from '@/db/schema';
 import { env } from '@/lib/env';
 import { toAppError } from '@/lib/errors';
@@ -16,14 +16,20 @@ export function usesSecureCookies() {
   return env().NODE_ENV === 'production' && env().APP_URL.startsWith('https:');
 }
 
-/** The account behind a session, or null when it is gone or deactivated. */
-export async function findActiveAccount(id: string) {
+/** The session's account look-up, prepared once: it runs on every signed-in request. */
+const accountStatement = perDatabase((reader: typeof db) =>
   // The primary, not a replica: deactivation and a new session version must end a session at once.
-  const [row] = await primaryOf(db)
+  primaryOf(reader)
     .select({ id: users.id, role: users.role, sessionVersion: users.sessionVersion, deactivatedAt: users.deactivatedAt, name: users.name, email: users.email })
     .from(users)
-    .where(eq(users.id, id))
-    .limit(1);
+    .where(eq(users.id, sql.placeholder('id')))
+    .limit(1)
+    .prepare(),
+);
+
+/** The account behind a session, or null when it is gone or deactivated. */
+export async function findActiveAccount(id: string) {
+  const [row] = await accountStatement(db).execute({ id });
   return row && !row.deactivatedAt ? row : null;
 }
 
