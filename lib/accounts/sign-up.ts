@@ -5,6 +5,8 @@ import { users, workshops } from '@/db/schema';
 import { defineOperation } from '@/lib/auth/operation';
 import { TOKEN_LIFETIME_MS, issueToken } from '@/lib/auth/one-time-tokens';
 import { hashPassword } from '@/lib/auth/password';
+import { isRateLimited, recordAttempt, subjectsFor } from '@/lib/auth/rate-limit';
+import { AppError } from '@/lib/errors';
 import { appLink } from '@/lib/mail/links';
 import { enqueueEmail } from '@/lib/mail/outbox';
 import { signUpSchema } from '@/lib/validation/sign-up';
@@ -19,7 +21,12 @@ export const signUp = defineOperation({
   entityType: 'user',
   access: 'public',
   input: signUpSchema,
-  async run({ input, tx }) {
+  async run({ input, ip, tx }) {
+    // Refused alike for known and new addresses, so the limit tells nothing about who has an account.
+    const subjects = subjectsFor('sign-up', input.email, ip);
+    if (await isRateLimited(subjects)) throw new AppError('rate_limited');
+    // Counted outside the transaction so that refused and failed requests count too.
+    await recordAttempt(subjects);
     // Hash first in both cases so a known address does not answer faster.
     const passwordHash = await hashPassword(input.password);
     const [existing] = await tx.select({ id: users.id, name: users.name }).from(users).where(eq(users.email, input.email)).limit(1);

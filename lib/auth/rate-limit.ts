@@ -13,13 +13,17 @@ export const RATE_LIMITS = {
   'sign-in:ip': { limit: 50, windowMs: 60_000 },
   'reset:account': { limit: 5, windowMs: 15 * 60_000 },
   'reset:ip': { limit: 20, windowMs: 15 * 60_000 },
+  // Every sign-up sends a mail: these keep the form from being used to flood an inbox or create
+  // accounts in bulk (our own common practice, no published source).
+  'sign-up:account': { limit: 5, windowMs: 15 * 60_000 },
+  'sign-up:ip': { limit: 20, windowMs: 60 * 60_000 },
 } as const;
 
 export type RateLimitName = keyof typeof RATE_LIMITS;
 export type RateLimitSubject = { name: RateLimitName; key: string };
 
 /** The subjects for one person at one address; the address is left out when it is unknown. */
-export function subjectsFor(kind: 'sign-in' | 'reset', account: string, ip: string | null): RateLimitSubject[] {
+export function subjectsFor(kind: 'sign-in' | 'reset' | 'sign-up', account: string, ip: string | null): RateLimitSubject[] {
   const subjects: RateLimitSubject[] = [{ name: `${kind}:account`, key: account.trim().toLowerCase() }];
   if (ip) subjects.push({ name: `${kind}:ip`, key: ip });
   return subjects;

@@ -38,6 +38,27 @@ describe('account operations', () => {
     expect((await outboxFor(fresh)).map((m) => m.template)).toEqual(['verify-email']);
   });
 
+  it('refuses a sixth sign-up for one address within 15 minutes, whether or not it has an account', async () => {
+    for (const email of [uniqueEmail('repeat'), (await createAccount('buyer')).email]) {
+      const answers = [];
+      for (let i = 0; i < 6; i += 1) answers.push(await signUp.execute(null, signUpInput(email)));
+      expect(answers.slice(0, 5).every((a) => a.ok)).toBe(true);
+      expect(answers[5]).toMatchObject({ ok: false, code: 'rate_limited' });
+      // Five mails at most reach the address.
+      expect((await outboxFor(email)).length).toBeLessThanOrEqual(5);
+    }
+  });
+
+  it('refuses the 21st sign-up from one network address within the hour', async () => {
+    const ip = `198.51.100.${Math.floor(Math.random() * 200) + 20}`;
+    const answers = [];
+    for (let i = 0; i < 21; i += 1) answers.push(await signUp.execute(null, signUpInput(uniqueEmail('bulk')), { ip }));
+    expect(answers.slice(0, 20).every((a) => a.ok)).toBe(true);
+    expect(answers[20]).toMatchObject({ ok: false, code: 'rate_limited' });
+    // Another address is not held up by it.
+    await expect(signUp.execute(null, signUpInput(uniqueEmail('other')), { ip: '203.0.113.9' })).resolves.toMatchObject({ ok: true });
+  });
+
   it('confirms an address once; the same link a second time is refused', async () => {
     const account = await createAccount('seller', { confirmed: false });
     const token = await issueToken(db, account.id, 'verify_email');
