@@ -65,7 +65,7 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
           <ConditionScaleMark grade={grade} width={250} />
           <Text style={{ ...styles.factLabel, marginTop: 10 }}>Confidence</Text>
           <Text style={{ ...styles.factValue }}>
-            {confidencePercent} % of the check weight measured ({r.confidence.measuredChecks} of {r.confidence.totalChecks} checks)
+            {confidencePercent} % of the check weight measured ({r.confidence.measuredChecks} of {r.confidence.totalChecks} check{r.confidence.totalChecks === 1 ? '' : 's'})
           </Text>
         </View>
         <View style={{ ...styles.panel, width: 190 }}>
@@ -120,7 +120,7 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
           <Text style={{ width: 60, fontWeight: 600, color: gradeColour(s.grade) }}>{s.grade ?? 'Not assessed'}</Text>
           <Text style={{ width: 50, textAlign: 'right', ...styles.figures }}>{s.score === null ? '—' : `${s.score.toFixed(1)} / 100`}</Text>
           <Text style={{ width: 97, textAlign: 'right', color: COLOURS.inkSoft, ...styles.figures }}>
-            {s.measuredChecks} of {s.totalChecks} checks
+            {s.measuredChecks} of {s.totalChecks} check{s.totalChecks === 1 ? '' : 's'}
           </Text>
         </View>
       ))}

@@ -38,7 +38,7 @@ export function SubsystemPage({
         <View style={{ alignItems: 'flex-end' }}>
           <Text style={{ fontSize: 15, fontWeight: 600, lineHeight: 1.2, color: gradeColour(subsystem.grade) }}>{subsystem.grade ?? 'Not assessed'}</Text>
           <Text style={{ ...styles.small, ...styles.figures }}>
-            {subsystem.score === null ? 'no score' : `score ${subsystem.score.toFixed(1)} of 100`} · {subsystem.measuredChecks} of {subsystem.totalChecks} checks measured
+            {subsystem.score === null ? 'no score' : `score ${subsystem.score.toFixed(1)} of 100`} · {subsystem.measuredChecks} of {subsystem.totalChecks} check{subsystem.totalChecks === 1 ? '' : 's'} measured
           </Text>
         </View>
       </View>
