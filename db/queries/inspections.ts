@@ -1,7 +1,7 @@
 import 'server-only';
-import { and, asc, count, desc, eq, gte, inArray, isNull } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gte, inArray, isNull, sql } from 'drizzle-orm';
 import { db } from '@/db/client';
-import { inspectionFees, inspections, inspectionStatusEvents, machines, photos, reports, surveys, users } from '@/db/schema';
+import { inspectionFees, inspections, inspectionStatusEvents, machines, photos, reinspectionRequests, reports, surveys, users } from '@/db/schema';
 import type { InspectionStatus } from '@/db/schema/inspections';
 import type { SizeClass } from '@/lib/machine-size';
 
@@ -22,6 +22,8 @@ export async function listInspectionQueue(statuses: InspectionStatus[]) {
       town: machines.town,
       region: machines.region,
       inspectorName: users.name,
+      // Opened by a paid re-inspection request rather than by the seller.
+      reinspection: sql`exists (select 1 from ${reinspectionRequests} where ${reinspectionRequests.inspectionId} = ${inspections.id})`.mapWith((v) => Number(v) === 1),
     })
     .from(inspections)
     .innerJoin(machines, eq(machines.id, inspections.machineId))

@@ -1,11 +1,12 @@
 import 'server-only';
 import { and, eq, isNull } from 'drizzle-orm';
-import { orders, reportAccessGrants } from '@/db/schema';
+import { orders, reinspectionRequests, reportAccessGrants } from '@/db/schema';
 import type { OrderWithContext } from '@/db/queries/purchases';
 import { markReinspectionRequestRefunded } from '@/db/queries/reinspection-requests';
 import type { Transaction } from '@/lib/auth/operation';
 import { appLink } from '@/lib/mail/links';
 import { enqueueEmail } from '@/lib/mail/outbox';
+import { cancelVisitBeforeItStarts } from '@/lib/reinspection/cancel-visit';
 import { receiptNumber } from './receipt-number';
 
 /**
@@ -46,7 +47,7 @@ export async function markOrderPaid(tx: Transaction, ctx: OrderWithContext, inpu
 export async function markOrderRefunded(
   tx: Transaction,
   ctx: OrderWithContext,
-  input: { paymentIntentId?: string | null; refundId?: string | null; reason: string; at: Date },
+  input: { paymentIntentId?: string | null; refundId?: string | null; reason: string; at: Date; by?: { id: string; name: string } },
 ) {
   const { order } = ctx;
   await tx
@@ -64,7 +65,22 @@ export async function markOrderRefunded(
     .set({ revokedAt: input.at })
     .where(and(eq(reportAccessGrants.orderId, order.id), isNull(reportAccessGrants.revokedAt)));
   const reinspection = order.purpose === 'reinspection';
-  if (reinspection) await markReinspectionRequestRefunded(tx, order.id, input.at);
+  if (reinspection) {
+    await markReinspectionRequestRefunded(tx, order.id, input.at);
+    // The fee paid for a visit: without it the visit does not happen, whoever refunded it.
+    const [request] = await tx
+      .select({ inspectionId: reinspectionRequests.inspectionId, machineId: reinspectionRequests.machineId })
+      .from(reinspectionRequests)
+      .where(eq(reinspectionRequests.orderId, order.id));
+    if (request?.inspectionId) {
+      await cancelVisitBeforeItStarts(tx, request.inspectionId, {
+        machineId: request.machineId,
+        reason: `The re-inspection fee was refunded before the visit started, so the visit is cancelled. Reason for the refund: ${input.reason}`,
+        actorId: input.by?.id ?? null,
+        cancelledBy: input.by?.name ?? 'Waygrade',
+      });
+    }
+  }
   await enqueueEmail(tx, {
     to: ctx.buyer.email,
     template: 'refund',

@@ -18,13 +18,13 @@ export function refundOrderOperation(provider: () => PaymentProvider = () => str
     entityType: 'order',
     access: 'payments.refund',
     input: refundOrderSchema,
-    async run({ input, tx }) {
+    async run({ actor, input, tx }) {
       const ctx = await lockOrderWithContext(tx, input.orderId);
       if (!ctx) throw new AppError('not_found');
       if (ctx.order.status !== 'paid') throw new AppError('conflict', `Only a paid order can be refunded; this one is ${ctx.order.status}.`);
       if (!ctx.order.providerPaymentIntentId) throw new AppError('conflict', 'This order has no payment on record with the provider, so it cannot be refunded here.');
       const { refundId } = await provider().refundPayment({ orderId: ctx.order.id, paymentIntentId: ctx.order.providerPaymentIntentId, reason: input.reason });
-      await markOrderRefunded(tx, ctx, { refundId, reason: input.reason, at: new Date() });
+      await markOrderRefunded(tx, ctx, { refundId, reason: input.reason, at: new Date(), by: { id: actor!.id, name: actor!.name ?? 'a Waygrade coordinator' } });
       return { data: { orderId: ctx.order.id, refundId }, entityId: ctx.order.id, detail: { refundId, reason: input.reason } };
     },
   });

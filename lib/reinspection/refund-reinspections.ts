@@ -1,14 +1,12 @@
 import 'server-only';
 import { and, eq, inArray } from 'drizzle-orm';
-import { inspections, machines, reinspectionRequests, users } from '@/db/schema';
+import { inspections, reinspectionRequests } from '@/db/schema';
 import { lockOrderWithContext } from '@/db/queries/purchases';
 import { BEFORE_VISIT_STATUSES, markReinspectionRequestRefunded } from '@/db/queries/reinspection-requests';
 import type { Transaction } from '@/lib/auth/operation';
-import { appLink } from '@/lib/mail/links';
-import { enqueueEmail } from '@/lib/mail/outbox';
 import type { PaymentProvider } from '@/lib/payments/apply-payment-event';
 import { markOrderRefunded } from '@/lib/payments/order-transitions';
-import { moveInspection } from '@/lib/workflow/status-events';
+import { cancelVisitBeforeItStarts } from './cancel-visit';
 
 /** Why paid re-inspections end before the visit, as the requester and the inspector read it. */
 export const REINSPECTION_CANCEL_REASONS = {
@@ -101,7 +99,7 @@ export async function cancelReinspectionsBeforeVisit(
 
   const inspectionIds = [...new Set(beforeVisit.map((r) => r.inspectionId).filter((id): id is number => id !== null))];
   for (const inspectionId of inspectionIds) {
-    if (await cancelInspectionBeforeVisit(tx, inspectionId, input)) summary.inspectionsCancelled += 1;
+    if (await cancelVisitBeforeItStarts(tx, inspectionId, input)) summary.inspectionsCancelled += 1;
   }
   for (const request of beforeVisit) {
     const outcome = await attemptReinspectionRefund(tx, request.id, provider, now);
@@ -109,33 +107,4 @@ export async function cancelReinspectionsBeforeVisit(
     else if (outcome === 'failed') summary.refundsRetrying += 1;
   }
   return summary;
-}
-
-/** Cancels one inspection that has not started and tells its inspector, if one was assigned. */
-async function cancelInspectionBeforeVisit(tx: Transaction, inspectionId: number, input: { machineId: number; reason: string; actorId: string; cancelledBy: string }) {
-  const [inspection] = await tx.select().from(inspections).where(eq(inspections.id, inspectionId)).for('update');
-  if (!inspection || !(BEFORE_VISIT_STATUSES as readonly string[]).includes(inspection.status)) return false;
-  await moveInspection(tx, { inspectionId, from: inspection.status, to: 'cancelled', actorId: input.actorId, note: input.reason, changes: { cancelReason: input.reason } });
-  if (!inspection.inspectorId) return true;
-  const [row] = await tx
-    .select({ email: users.email, name: users.name, maker: machines.maker, model: machines.model, serialNumber: machines.serialNumber })
-    .from(users)
-    .innerJoin(machines, eq(machines.id, input.machineId))
-    .where(eq(users.id, inspection.inspectorId));
-  if (row) {
-    await enqueueEmail(tx, {
-      to: row.email,
-      template: 'inspection-cancelled',
-      data: {
-        recipientName: row.name,
-        audience: 'inspector',
-        machine: { maker: row.maker, model: row.model, serialNumber: row.serialNumber },
-        scheduledAt: inspection.scheduledAt,
-        reason: input.reason,
-        cancelledBy: input.cancelledBy,
-        url: appLink('/jobs'),
-      },
-    });
-  }
-  return true;
 }

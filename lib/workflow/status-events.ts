@@ -7,7 +7,7 @@ import type { Transaction } from '@/lib/auth/operation';
 /** Moves an inspection to a new status and records the step on its timeline. */
 export async function moveInspection(
   tx: Transaction,
-  input: { inspectionId: number; from: InspectionStatus | null; to: InspectionStatus; actorId: string; note?: string | null; changes?: Partial<typeof inspections.$inferInsert> },
+  input: { inspectionId: number; from: InspectionStatus | null; to: InspectionStatus; actorId: string | null; note?: string | null; changes?: Partial<typeof inspections.$inferInsert> },
 ) {
   await tx
     .update(inspections)

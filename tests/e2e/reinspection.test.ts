@@ -51,6 +51,21 @@ describe('a re-inspection paid before the visit and refunded by the sale', () =>
     await page.close();
   });
 
+  it('shows the coordinators the paid re-inspection in the queue, marked as one', async () => {
+    const coordinator = await createAccount('admin');
+    const browser = await openBrowser();
+    try {
+      const page = await browser.newPage();
+      await signIn(page, coordinator.email, coordinator.password);
+      await page.goto('/inspections?tab=to-book');
+      const row = page.getByRole('row').filter({ hasText: `Tessvale ${model}` });
+      await row.getByText('Re-inspection · fee paid by the requester').waitFor();
+      await screenshot(page, 'reinspection-in-queue');
+    } finally {
+      await browser.close();
+    }
+  });
+
   it('lets the seller mark the machine sold, after which the buyer sees the fee refunded', async () => {
     const page = await sellerBrowser.newPage();
     await signIn(page, seller.email, seller.password);

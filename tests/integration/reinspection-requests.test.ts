@@ -4,6 +4,7 @@ import { closeDatabase, db } from '@/db/client';
 import { inspections, machines, reportAccessGrants, reports } from '@/db/schema';
 import { listOutstandingReinspectionRefunds } from '@/db/queries/reinspection-requests';
 import { applyPaymentEvent, type PaymentProvider } from '@/lib/payments/apply-payment-event';
+import { refundOrderOperation } from '@/lib/payments/refund-order';
 import { OFF_MARKET_REFUND_REASON } from '@/lib/reinspection/confirm-reinspection-payment';
 import { REINSPECTION_CANCEL_REASONS } from '@/lib/reinspection/refund-reinspections';
 import { retryDueReinspectionRefunds } from '@/lib/reinspection/refund-worker';
@@ -12,7 +13,7 @@ import { bookInspection } from '@/lib/workflow/inspections';
 import { setListingStatus, setListingStatusOperation } from '@/lib/workflow/listing-status';
 import { releaseReport } from '@/lib/workflow/review';
 import { createAccount, type TestAccount } from '../support/accounts';
-import { completedSession, providerEvent, queuedMails, signedHeader } from '../support/purchase-fixtures';
+import { completedSession, providerEvent, queuedMails, refundedCharge, signedHeader } from '../support/purchase-fixtures';
 import {
   createAgedReleasedReport,
   createDraftReport,
@@ -167,6 +168,32 @@ describe('a re-inspection request', () => {
     await new Promise((resolve) => setTimeout(resolve, 1000));
     expect(await refundEventsAtStandIn(order.providerPaymentIntentId!)).toHaveLength(0);
     expect(await queuedMails(request.buyer.email, 'refund')).toHaveLength(0);
+  });
+
+  it('cancels the booked visit when a coordinator refunds the fee, and tells the inspector', async () => {
+    const request = await paidRequest();
+    const coordinator = await createAccount('admin');
+    const inspector = await createAccount('inspector');
+    const tomorrow = new Date(Date.now() + 86_400_000).toISOString().slice(0, 10);
+    await bookInspection.execute(coordinator.actor, { inspectionId: request.newInspectionId, inspectorId: inspector.id, date: tomorrow, time: '10:00', feeEuros: 390 });
+    const order = await readOrderOf(request.requestId);
+    const refunded = await refundOrderOperation(() => fakeProvider()).execute(coordinator.actor, { orderId: order.id, reason: 'Requester changed their mind' });
+    expect(refunded.ok).toBe(true);
+    expect(await readRequest(request.requestId)).toMatchObject({ status: 'refunded' });
+    const inspection = await readInspection(request.newInspectionId);
+    expect(inspection.status).toBe('cancelled');
+    expect(inspection.cancelReason).toContain('Requester changed their mind');
+    expect(await queuedInspections(request.machineId)).not.toContainEqual(expect.objectContaining({ id: request.newInspectionId }));
+    expect(await queuedMails(inspector.email, 'inspection-cancelled')).toHaveLength(1);
+  });
+
+  it('cancels a visit not yet booked when the fee is refunded from the payment provider’s dashboard', async () => {
+    const request = await paidRequest();
+    const order = await readOrderOf(request.requestId);
+    const result = await db.transaction((tx) => applyPaymentEvent(tx, providerEvent('charge.refunded', refundedCharge(order.providerPaymentIntentId!)), fakeProvider()));
+    expect(result.outcome).toBe('refunded');
+    expect(await readRequest(request.requestId)).toMatchObject({ status: 'refunded' });
+    expect(await readInspection(request.newInspectionId)).toMatchObject({ status: 'cancelled' });
   });
 
   it('refunds at once a payment that completes after the machine was withdrawn', async () => {

@@ -70,6 +70,9 @@ export default async function InspectionsPage({ searchParams }: { searchParams: 
                     <p className="figures text-sm text-ink-soft">
                       {formatMm(row.swingMm)} × {formatMm(row.betweenCentresMm)} · {row.sizeClass}
                     </p>
+                    {row.reinspection ? (
+                      <p className="mt-1 inline-flex rounded-full border border-copper px-2 py-0.5 text-sm font-medium text-copper-dark">Re-inspection · fee paid by the requester</p>
+                    ) : null}
                   </td>
                   <td className="py-3 pr-3">
                     {row.town}
