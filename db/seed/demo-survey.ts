@@ -1,5 +1,6 @@
 import type { LatheSurvey } from '@/lib/scoring';
 import type { Random } from './random';
+import { SURVEY_SECTION_IDS, type SurveySectionId } from '@/lib/survey/survey-sections';
 
 type DemoMachine = {
   latheKind: 'general_purpose' | 'toolroom';
@@ -18,19 +19,13 @@ type DemoMachine = {
 const mm = (value: number) => ({ value: Number(value.toFixed(4)), unit: 'mm' as const });
 const clampRating = (value: number) => Math.max(0, Math.min(3, Math.round(value))) as 0 | 1 | 2 | 3;
 
-/** Which sections an inspector has reached, in the on-site order. */
-export const SURVEY_SECTIONS_IN_ORDER = [
-  'lubrication',
-  'gearboxAndFeeds',
-  'drive',
-  'bedAndWays',
-  'spindle',
-  'slidesAndScrews',
-  'tailstock',
-  'testCuts',
-  'electricalAndSafety',
-  'accessories',
-] as const;
+/**
+ * The sections a demo survey fills, in the survey's on-site order (lib/survey/survey-sections.ts):
+ * all but the identity screen (the survey's machine and date), the hidden-damage checklist and the
+ * power-run log, which demo surveys leave out.
+ */
+const NOT_IN_DEMO_SURVEYS: ReadonlySet<SurveySectionId> = new Set(['identity', 'hiddenDamage', 'powerRun']);
+export const SURVEY_SECTIONS_IN_ORDER = SURVEY_SECTION_IDS.filter((id) => !NOT_IN_DEMO_SURVEYS.has(id));
 
 /**
  * A plausible survey of a demo machine. `wear` runs from 0 (as new) to 1 (worn out); readings grow
