@@ -7,13 +7,20 @@ import { signOutAction } from './sign-out-action';
 
 export default async function BackofficeLayout({ children }: { children: ReactNode }) {
   const user = await requirePageSession();
+  const navigation = ROLE_NAVIGATION[user.role];
+  // A long menu (the coordinators' nine pages) gets a row of its own at every width rather than
+  // squeezing against the name; short ones sit beside the logo from tablet width up.
+  const ownRow = navigation.length > 5;
   return (
     <div className="min-h-screen">
       <header className="border-b border-line bg-paper-raised">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 px-5 py-1.5">
           <Logo href="/dashboard" />
-          <nav aria-label="Main" className="order-last -mx-2 flex w-full gap-1 overflow-x-auto md:order-none md:mx-0 md:w-auto md:flex-1">
-            {ROLE_NAVIGATION[user.role].map((item) => (
+          <nav
+            aria-label="Main"
+            className={`order-last -mx-2 flex w-full gap-1 overflow-x-auto ${ownRow ? 'border-t border-line pt-1' : 'md:order-none md:mx-0 md:w-auto md:flex-1'}`}
+          >
+            {navigation.map((item) => (
               <Link
                 key={item.href}
                 href={item.href}
