@@ -31,6 +31,17 @@ describe('the application shell', () => {
     await page.close();
   });
 
+  it('answers a report that does not exist with status 404, signed in', async () => {
+    const dealer = DEMO_LOGINS.accounts.find((a) => a.role === 'dealer')!;
+    const context = await openBrowser();
+    const page = await context.newPage();
+    await signIn(page, dealer.email, DEMO_LOGINS.password);
+    const response = await page.goto('/reports/999999999');
+    expect(response?.status()).toBe(404);
+    await page.getByText('This page is off the bed.').waitFor();
+    await context.close();
+  });
+
   it('sends a signed-out visitor of the overview to sign-in', async () => {
     const page = await browser.newPage();
     await page.goto('/dashboard');

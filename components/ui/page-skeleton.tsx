@@ -1,4 +1,9 @@
-export default function Loading() {
+/**
+ * What a list page shows while its data loads. Only pages that never answer "not found" use it (as
+ * their loading.tsx): above a notFound() a loading boundary starts the response with status 200
+ * before the page can say 404.
+ */
+export function PageSkeleton() {
   return (
     <div role="status" aria-live="polite" className="mx-auto max-w-5xl px-5 py-12">
       <div className="h-8 w-64 animate-pulse rounded bg-paper-sunken" />
