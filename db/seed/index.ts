@@ -143,12 +143,17 @@ export async function seedDemo(now = new Date()) {
         })
         .$returningId();
       const machineId = machine!.id;
+      // Listed some days before the inspection was asked for, so demo listings show their days on the
+      // market (a spread of its own, leaving the seeded random sequence, and so the demo data, as it was).
+      const listedDaysBefore = 3 + ((machineIndex * 11) % 45);
       if (plan.status === 'none') {
+        await db.update(machines).set({ createdAt: new Date(now.getTime() - listedDaysBefore * DAY) }).where(eq(machines.id, machineId));
         created.push({ machineId, inspectionId: null, status: 'none' });
         continue;
       }
 
       const requestedAt = new Date(now.getTime() - random.int(20, 120) * DAY);
+      await db.update(machines).set({ createdAt: new Date(requestedAt.getTime() - listedDaysBefore * DAY) }).where(eq(machines.id, machineId));
       const reachesIndex = plan.status === 'cancelled' ? random.int(0, 1) : STATUS_PATH.indexOf(plan.status);
       const booked = reachesIndex >= 1;
       const inspector = inspectors[machineIndex % inspectors.length]!;
