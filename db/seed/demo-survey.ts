@@ -27,6 +27,8 @@ const clampRating = (value: number) => Math.max(0, Math.min(3, Math.round(value)
 const NOT_IN_DEMO_SURVEYS: ReadonlySet<SurveySectionId> = new Set(['identity', 'hiddenDamage', 'powerRun']);
 export const SURVEY_SECTIONS_IN_ORDER = SURVEY_SECTION_IDS.filter((id) => !NOT_IN_DEMO_SURVEYS.has(id));
 
+const POWER_RUN_MINUTES = [20, 25, 35, 45] as const;
+
 /**
  * A plausible survey of a demo machine. `wear` runs from 0 (as new) to 1 (worn out); readings grow
  * with it and with a little scatter. `sectionsDone` cuts the survey short for inspections in progress.
@@ -153,6 +155,14 @@ export function demoSurvey(
       { kind: 'fixed-steady', condition: rating(2) },
       { kind: 'tool-post', description: 'quick-change', condition: rating(2.5) },
     ],
+    // Started cold early in the visit and run before the readings (domain.md's power run). The minutes
+    // follow the day of the month rather than the seeded random sequence, so the rest of the demo data
+    // stays as it was, and demo reports show both cold readings (under 30 min) and warm ones.
+    powerRun: {
+      startState: 'cold',
+      minutesRunBeforeReadings: POWER_RUN_MINUTES[Number(options.inspectedOn.slice(8, 10)) % POWER_RUN_MINUTES.length]!,
+      startedAt: `${options.inspectedOn}T08:15:00Z`,
+    },
   };
 
   const done = options.sectionsDone ?? SURVEY_SECTIONS_IN_ORDER.length;
