@@ -163,7 +163,6 @@ export function demoSurvey(
     powerRun: {
       startState: 'cold',
       minutesRunBeforeReadings: POWER_RUN_MINUTES[Number(options.inspectedOn.slice(8, 10)) % POWER_RUN_MINUTES.length]!,
-      startedAt: `${options.inspectedOn}T08:15:00Z`,
     },
   };
 
