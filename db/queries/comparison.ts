@@ -192,21 +192,21 @@ const datetimeText = (d: Date) => d.toISOString().replace('T', ' ').replace('Z',
 
 const EURO = 100;
 
+/** The numeric range filters, by the stem of their Min / Max keys. */
+type RangeFilter = 'swing' | 'centres' | 'year' | 'confidence' | 'price' | 'value' | 'ratio' | 'repair' | 'landed' | 'inclusions';
+
 /**
  * WHERE for a validated filter. Every value is a named placeholder whose value `b` keeps, so the
  * statement's text depends only on which filters are set (and how many choices each list has).
  */
 function whereFor(filters: ComparisonFilters, details: Details, viewer: ComparisonViewer, b: Bindings): SQL | undefined {
   const conditions: Array<SQL | undefined> = [];
-  const range = (
-    expression: SQLWrapper,
-    [lowName, highName]: readonly [string, string],
-    low: number | undefined,
-    high: number | undefined,
-    scale = 1,
-  ) => {
-    if (low !== undefined) conditions.push(gte(expression, b.bind(lowName, low * scale)));
-    if (high !== undefined) conditions.push(lte(expression, b.bind(highName, high * scale)));
+  // A range filter is the pair <name>Min / <name>Max, each its own placeholder.
+  const range = (expression: SQLWrapper, name: RangeFilter, scale = 1) => {
+    const low = filters[`${name}Min`];
+    const high = filters[`${name}Max`];
+    if (low !== undefined) conditions.push(gte(expression, b.bind(`${name}Min`, low * scale)));
+    if (high !== undefined) conditions.push(lte(expression, b.bind(`${name}Max`, high * scale)));
   };
   const oneOf = (column: AnyColumn, name: string, values: readonly string[] | undefined) => {
     if (values) conditions.push(inArray(column, values.map((value, i) => b.bind(`${name}.${i}`, value))));
@@ -222,16 +222,16 @@ function whereFor(filters: ComparisonFilters, details: Details, viewer: Comparis
     const key = SUBSYSTEM_KEYS[id];
     oneOf(SUBSYSTEM_COLUMNS[key].grade, `grade.${key}`, filters[`grade.${key}`]);
   }
-  range(e.swingMm, ['swingMin', 'swingMax'], filters.swingMin, filters.swingMax);
-  range(e.betweenCentresMm, ['centresMin', 'centresMax'], filters.centresMin, filters.centresMax);
-  range(e.yearBuilt, ['yearMin', 'yearMax'], filters.yearMin, filters.yearMax);
-  range(e.confidence, ['confidenceMin', 'confidenceMax'], filters.confidenceMin, filters.confidenceMax, 0.01);
-  range(e.askingPriceMinor, ['priceMin', 'priceMax'], filters.priceMin, filters.priceMax, EURO);
-  range(details.value, ['valueMin', 'valueMax'], filters.valueMin, filters.valueMax, EURO);
-  range(details.ratio, ['ratioMin', 'ratioMax'], filters.ratioMin, filters.ratioMax);
-  range(details.repair, ['repairMin', 'repairMax'], filters.repairMin, filters.repairMax, EURO);
-  range(details.landed, ['landedMin', 'landedMax'], filters.landedMin, filters.landedMax, EURO);
-  range(details.inclusions, ['inclusionsMin', 'inclusionsMax'], filters.inclusionsMin, filters.inclusionsMax, EURO);
+  range(e.swingMm, 'swing');
+  range(e.betweenCentresMm, 'centres');
+  range(e.yearBuilt, 'year');
+  range(e.confidence, 'confidence', 0.01);
+  range(e.askingPriceMinor, 'price', EURO);
+  range(details.value, 'value', EURO);
+  range(details.ratio, 'ratio');
+  range(details.repair, 'repair', EURO);
+  range(details.landed, 'landed', EURO);
+  range(details.inclusions, 'inclusions', EURO);
   // The choice between = 0 and > 0 is part of the statement's text (see statementShape).
   if (filters.dealBreakers === 'none') conditions.push(eq(e.dealBreakerCount, 0));
   if (filters.dealBreakers === 'any') conditions.push(gt(e.dealBreakerCount, 0));
