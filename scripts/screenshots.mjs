@@ -5,9 +5,8 @@
 import { existsSync, mkdirSync, readdirSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import sharp from 'sharp';
-import { bringUp, buildApp, ensureNodeModules, NEXT_DIST_DIR, root, startApp } from './lib/stack.mjs';
+import { bringUpTestStack, buildApp, NEXT_DIST_DIR, root, startApp } from './lib/stack.mjs';
 import { run, waitForHttp } from './lib/processes.mjs';
-import { ensureDebianPackage } from './lib/debian-package.mjs';
 
 const RAW_DIR = path.join(root, 'tmp', 'screenshots', 'readme');
 const OUT_DIR = path.join(root, 'docs', 'screenshots');
@@ -33,12 +32,8 @@ async function optimise(input, output) {
 let stack;
 let exitCode = 1;
 try {
-  await ensureNodeModules();
-  const chromium = ensureDebianPackage('chromium', 'chromium');
-  ensureDebianPackage('pdftoppm', 'poppler-utils');
-  stack = await bringUp('test', { resetDatabase: true });
-  const env = { ...stack.env, CHROMIUM_PATH: chromium, NODE_ENV: 'test' };
-  await run(process.execPath, ['--conditions=react-server', '--import', 'tsx', 'db/seed/index.ts'], { cwd: root, env });
+  let env;
+  ({ stack, env } = await bringUpTestStack());
   if (!process.argv.includes('--no-build') || !existsSync(path.join(root, NEXT_DIST_DIR, 'BUILD_ID'))) {
     await buildApp({ ...env, NODE_ENV: 'production' });
   }

@@ -2,9 +2,8 @@
 // and end-to-end tests. Ends with a plain "N passed, N failed" line; exits non-zero on any failure.
 import { readFileSync, rmSync, mkdirSync } from 'node:fs';
 import path from 'node:path';
-import { bringUp, buildApp, ensureNodeModules, root, startApp } from './lib/stack.mjs';
+import { bringUpTestStack, buildApp, root, startApp } from './lib/stack.mjs';
 import { run, waitForHttp } from './lib/processes.mjs';
-import { ensureDebianPackage } from './lib/debian-package.mjs';
 
 const startedAt = Date.now();
 // `npm run test:load` (--load): the same stack and build, then only the load test, which is too heavy
@@ -32,14 +31,8 @@ function vitestCounts(file) {
 
 let exitCode = 1;
 try {
-  await ensureNodeModules();
-  const chromium = ensureDebianPackage('chromium', 'chromium');
-  // The report PDF tests read their text back with pdftotext and render pages with pdftoppm.
-  ensureDebianPackage('pdftotext', 'poppler-utils');
-  stack = await bringUp('test', { resetDatabase: true });
-  const env = { ...stack.env, CHROMIUM_PATH: chromium, NODE_ENV: 'test' };
-
-  await run(process.execPath, ['--conditions=react-server', '--import', 'tsx', 'db/seed/index.ts'], { cwd: root, env });
+  let env;
+  ({ stack, env } = await bringUpTestStack());
 
   if (!LOAD_ONLY) {
     await check('type check', process.execPath, ['node_modules/typescript/bin/tsc', '--noEmit', '-p', '.'], env);

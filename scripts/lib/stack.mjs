@@ -6,7 +6,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ProcessGroup, portIsOpen, run, waitForPort } from './processes.mjs';
 import { appConnectionCount, databaseUrl, startMariaDb, stopMariaDb } from './mariadb.mjs';
-import { findProgram } from './debian-package.mjs';
+import { ensureDebianPackage, findProgram } from './debian-package.mjs';
 
 export const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 
@@ -179,6 +179,26 @@ async function resetSchema(paths, database) {
 }
 
 /** Builds the app for production. */
+/**
+ * The stack `npm test` and `npm run screenshots` run on: npm packages, Debian's chromium and
+ * poppler-utils (the PDF tests read text with pdftotext and render pages with pdftoppm), the test
+ * profile with its database reset, and the demo data. Returns the stack (to stop) and the tests' env.
+ */
+export async function bringUpTestStack() {
+  await ensureNodeModules();
+  const chromium = ensureDebianPackage('chromium', 'chromium');
+  ensureDebianPackage('pdftotext', 'poppler-utils');
+  const stack = await bringUp('test', { resetDatabase: true });
+  const env = { ...stack.env, CHROMIUM_PATH: chromium, NODE_ENV: 'test' };
+  try {
+    await run(process.execPath, ['--conditions=react-server', '--import', 'tsx', 'db/seed/index.ts'], { cwd: root, env });
+  } catch (error) {
+    await stack.stop();
+    throw error;
+  }
+  return { stack, env };
+}
+
 export async function buildApp(env) {
   await run(node, ['node_modules/next/dist/bin/next', 'build'], { cwd: root, env });
 }
