@@ -118,6 +118,9 @@ describe('an inspection from listing to released report', () => {
     await page.getByLabel('Comment').fill('Please add the top-slide backlash reading.');
     await page.getByRole('button', { name: 'Send back to the inspector' }).click();
     await page.getByText('Sent back. The survey is open again for the inspector.').waitFor();
+    // The page refreshes without the decision buttons; the outcome stays beside the new state.
+    await page.getByText('Nothing to decide now: the survey is with the inspector.').waitFor();
+    await page.getByText('Sent back. The survey is open again for the inspector.').waitFor();
     await page.close();
     await waitForMail(inspector.email, 'Survey sent back');
 

@@ -133,11 +133,8 @@ export default async function ReviewPage({ params }: { params: Promise<{ inspect
                     Last note ({formatDateTime(lastNote.createdAt)}): {lastNote.note}
                   </p>
                 ) : null}
-                {decisions.length ? (
-                  <ReviewActions inspectionId={inspection.id} reportId={report.id} decisions={[...decisions]} />
-                ) : (
-                  <p className="text-ink-soft">Nothing to decide now: the survey is with the inspector.</p>
-                )}
+                {/* Always mounted, so the outcome of a decision stays on screen after the page refreshes without its buttons. */}
+                <ReviewActions inspectionId={inspection.id} reportId={report.id} decisions={[...decisions]} />
               </Card>
               <Card title={`Photos (${photos.length})`}>
                 {photos.length === 0 ? (

@@ -27,7 +27,17 @@ export function ReviewActions({ inspectionId, reportId, decisions }: { inspectio
     setPending(null);
     if (!result.ok) return setMessage({ text: result.fieldErrors?.comment?.[0] ?? result.message, tone: 'error' });
     setMessage({ text: ACTIONS[decision].done, tone: 'ok' });
+    setComment('');
     router.refresh();
+  }
+
+  if (decisions.length === 0) {
+    return (
+      <div className="space-y-4">
+        <FormMessage message={message?.text} tone={message?.tone} />
+        <p className="text-ink-soft">Nothing to decide now: the survey is with the inspector.</p>
+      </div>
+    );
   }
 
   return (
