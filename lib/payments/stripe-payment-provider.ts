@@ -14,8 +14,9 @@ export function stripePaymentProvider(stripe: Stripe = stripeClient()): PaymentP
     async refundPayment({ orderId, paymentIntentId, reason }) {
       const refund = await stripe.refunds.create(
         { payment_intent: paymentIntentId, reason: 'requested_by_customer', metadata: { orderId: String(orderId), note: reason.slice(0, 450) } },
-        // One refund per order, however often this is retried.
-        { idempotencyKey: `waygrade-refund-order-${orderId}` },
+        // One refund per payment, however often or from wherever it is retried. The payment's id is the
+        // provider's own, so the key cannot meet another payment's after our database is recreated.
+        { idempotencyKey: `waygrade-refund-${paymentIntentId}` },
       );
       return { refundId: refund.id };
     },
