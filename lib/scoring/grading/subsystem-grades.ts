@@ -53,7 +53,7 @@ export function gradeSubsystems(checks: readonly CheckResult[]): SubsystemResult
       measuredChecks: measuredCount,
       totalChecks: total,
       worstCheckId: worst.id,
-      explanation: `score = ½ × weighted mean ${fmt(mean, 1)} + ½ × worst (${worst.label}) ${fmt(worst.score!, 1)} = ${fmt(score, 1)}; ${measuredCount} of ${total} checks measured.`,
+      explanation: `score = ½ × weighted mean ${fmt(mean, 1)} + ½ × worst (${worst.label}) ${fmt(worst.score!, 1)} = ${fmt(score, 1)}; ${measuredCount} of ${total} ${total === 1 ? 'check' : 'checks'} measured.`,
     });
   }
   return results;
