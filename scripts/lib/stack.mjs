@@ -178,7 +178,6 @@ async function resetSchema(paths, database) {
   if (result.status !== 0) throw new Error(`Could not reset ${database}: ${result.stderr}`);
 }
 
-/** Builds the app for production. */
 /**
  * The stack `npm test` and `npm run screenshots` run on: npm packages, Debian's chromium and
  * poppler-utils (the PDF tests read text with pdftotext and render pages with pdftoppm), the test
@@ -199,6 +198,7 @@ export async function bringUpTestStack() {
   return { stack, env };
 }
 
+/** Builds the app for production. */
 export async function buildApp(env) {
   await run(node, ['node_modules/next/dist/bin/next', 'build'], { cwd: root, env });
 }
