@@ -7,6 +7,7 @@ import {
   inspectionFees,
   inspections,
   inspectionStatusEvents,
+  machineDisclosures,
   machines,
   orders,
   reports,
@@ -26,7 +27,7 @@ import { DEMO_LOGINS } from './demo-logins.mjs';
 import { seededRandom, type Random } from './random';
 import { seedDemoPhotos } from './demo-photos';
 import { uploadthingFileStore } from '@/lib/storage/uploadthing-file-store';
-import { ACCESSORY_SETS, CANCEL_REASONS, FEES, LATHE_MODELS, SITE_NOTES, WORKSHOPS } from './scenario';
+import { ACCESSORY_SETS, CANCEL_REASONS, DISCLOSURES, FEES, LATHE_MODELS, SITE_NOTES, WORKSHOPS } from './scenario';
 import { demoComparableSales } from './comparable-sales';
 import { demoSurvey, SURVEY_SECTIONS_IN_ORDER } from './demo-survey';
 
@@ -143,17 +144,34 @@ export async function seedDemo(now = new Date()) {
         })
         .$returningId();
       const machineId = machine!.id;
+      // Four machines in five have the seller's disclosure, answered on the day of listing, so released reports set
+      // the seller's claims beside the findings; chosen by position, not by the seeded random sequence.
+      const disclose = async (listedAt: Date) => {
+        if (machineIndex % 5 === 2) return;
+        await db.insert(machineDisclosures).values({
+          machineId,
+          ...DISCLOSURES[machineIndex % DISCLOSURES.length]!,
+          supplyVoltage: model.phases === 1 ? 230 : 400,
+          supplyPhases: model.phases,
+          createdAt: listedAt,
+          updatedAt: listedAt,
+        });
+      };
       // Listed some days before the inspection was asked for, so demo listings show their days on the
       // market (a spread of its own, leaving the seeded random sequence, and so the demo data, as it was).
       const listedDaysBefore = 3 + ((machineIndex * 11) % 45);
       if (plan.status === 'none') {
-        await db.update(machines).set({ createdAt: new Date(now.getTime() - listedDaysBefore * DAY) }).where(eq(machines.id, machineId));
+        const listedAt = new Date(now.getTime() - listedDaysBefore * DAY);
+        await db.update(machines).set({ createdAt: listedAt }).where(eq(machines.id, machineId));
+        await disclose(listedAt);
         created.push({ machineId, inspectionId: null, status: 'none' });
         continue;
       }
 
       const requestedAt = new Date(now.getTime() - random.int(20, 120) * DAY);
-      await db.update(machines).set({ createdAt: new Date(requestedAt.getTime() - listedDaysBefore * DAY) }).where(eq(machines.id, machineId));
+      const listedAt = new Date(requestedAt.getTime() - listedDaysBefore * DAY);
+      await db.update(machines).set({ createdAt: listedAt }).where(eq(machines.id, machineId));
+      await disclose(listedAt);
       const reachesIndex = plan.status === 'cancelled' ? random.int(0, 1) : STATUS_PATH.indexOf(plan.status);
       const booked = reachesIndex >= 1;
       const inspector = inspectors[machineIndex % inspectors.length]!;

@@ -56,3 +56,46 @@ export const CANCEL_REASONS = [
   'Seller withdrew the listing.',
   'Site not accessible on the booked date; seller will request again.',
 ] as const;
+
+/**
+ * Sellers' answers to the disclosure questions (invented). Supply voltage and phases are taken from
+ * the machine itself when seeded; each answer set says something the report can set beside its findings.
+ */
+export const DISCLOSURES = [
+  {
+    knownFaults: '',
+    repairsAndRebuilds: 'New V-belts and a headstock oil change last spring.',
+    crashesOrDrops: '',
+    usage: 'toolroom-or-maintenance',
+    usageNotes: 'One operator; spares for the shop’s own presses.',
+    included: 'Everything on the accessory list stays with the machine.',
+    saleTerm: 'tested-under-power',
+  },
+  {
+    knownFaults: 'Backlash in the cross-slide screw; the top-slide gib wants adjusting.',
+    repairsAndRebuilds: '',
+    crashesOrDrops: '',
+    usage: 'production',
+    usageNotes: 'Two shifts of small-batch shafts until last year.',
+    included: 'Chucks and steadies as listed; the coolant tank is not included.',
+    saleTerm: 'as-is',
+  },
+  {
+    knownFaults: '',
+    repairsAndRebuilds: 'Bed reground and carriage re-scraped by a rebuilder about ten years ago.',
+    crashesOrDrops: '',
+    usage: 'training',
+    usageNotes: 'Apprentice workshop, light cuts only.',
+    included: 'Everything on the accessory list stays with the machine.',
+    saleTerm: 'reconditioned',
+  },
+  {
+    knownFaults: '',
+    repairsAndRebuilds: '',
+    crashesOrDrops: 'The carriage ran into the chuck once; nothing was found wrong at the time.',
+    usage: 'hobby',
+    usageNotes: 'Weekend use in a home garage.',
+    included: 'Only the 3-jaw chuck and the tool post; the rest is sold separately.',
+    saleTerm: 'as-is',
+  },
+] as const;
