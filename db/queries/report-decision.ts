@@ -1,5 +1,5 @@
 import 'server-only';
-import { asc, eq } from 'drizzle-orm';
+import { asc, eq, sql } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { inspections, machineInclusions, machinePriceChanges, machineMovingSheets, machines, reports, surveys } from '@/db/schema';
 import type { SupplySpec } from '@/lib/decision/phase-converter';
@@ -7,9 +7,9 @@ import { parseReleaseFacts } from '@/lib/decision/release-facts';
 import { findReportValidityDays } from './report-settings';
 import type { ScoringResult } from '@/lib/scoring';
 
-/** The nameplate supply the inspector recorded in the survey, if any. */
-function nameplateSupply(data: unknown): SupplySpec | null {
-  const supply = (data as { machine?: { supply?: { voltage?: unknown; phases?: unknown } } } | null)?.machine?.supply;
+/** The nameplate supply the inspector recorded in the survey (its machine.supply, as JSON), if any. */
+function nameplateSupply(json: unknown): SupplySpec | null {
+  const supply = (typeof json === 'string' ? JSON.parse(json) : json) as { voltage?: unknown; phases?: unknown } | null;
   if (!supply || typeof supply.voltage !== 'number' || (supply.phases !== 1 && supply.phases !== 3)) return null;
   return { voltage: supply.voltage, phases: supply.phases };
 }
@@ -27,7 +27,8 @@ export async function findReportDecisionFacts(reportId: number) {
       releasedAt: reports.releasedAt,
       repairEstimateMinor: reports.repairEstimateMinor,
       reportCurrency: reports.currency,
-      surveyData: surveys.data,
+      // Only the nameplate supply: the whole survey is not needed here.
+      surveySupply: sql<string | null>`JSON_EXTRACT(${surveys.data}, '$.machine.supply')`,
       surveySubmittedAt: surveys.submittedAt,
       scheduledAt: inspections.scheduledAt,
       askingPriceMinor: machines.askingPriceMinor,
@@ -44,20 +45,21 @@ export async function findReportDecisionFacts(reportId: number) {
     .limit(1);
   if (!row) return null;
   const result = (typeof row.result === 'string' ? JSON.parse(row.result) : row.result) as ScoringResult;
-  const surveyData = typeof row.surveyData === 'string' ? JSON.parse(row.surveyData) : row.surveyData;
-  const [moving] = await db.select().from(machineMovingSheets).where(eq(machineMovingSheets.machineId, row.machineId)).limit(1);
-  const inclusions = await db.select().from(machineInclusions).where(eq(machineInclusions.machineId, row.machineId)).orderBy(asc(machineInclusions.id));
-  const priceHistory = await db
-    .select({ askingPriceMinor: machinePriceChanges.askingPriceMinor, currency: machinePriceChanges.currency, changedAt: machinePriceChanges.createdAt })
-    .from(machinePriceChanges)
-    .where(eq(machinePriceChanges.machineId, row.machineId))
-    .orderBy(asc(machinePriceChanges.createdAt), asc(machinePriceChanges.id));
-  const validityDays = await findReportValidityDays();
+  const [[moving], inclusions, priceHistory, validityDays] = await Promise.all([
+    db.select().from(machineMovingSheets).where(eq(machineMovingSheets.machineId, row.machineId)).limit(1),
+    db.select().from(machineInclusions).where(eq(machineInclusions.machineId, row.machineId)).orderBy(asc(machineInclusions.id)),
+    db
+      .select({ askingPriceMinor: machinePriceChanges.askingPriceMinor, currency: machinePriceChanges.currency, changedAt: machinePriceChanges.createdAt })
+      .from(machinePriceChanges)
+      .where(eq(machinePriceChanges.machineId, row.machineId))
+      .orderBy(asc(machinePriceChanges.createdAt), asc(machinePriceChanges.id)),
+    findReportValidityDays(),
+  ]);
   const inspectedOn = result.machine.inspectedOn ? new Date(`${result.machine.inspectedOn.slice(0, 10)}T00:00:00Z`) : (row.scheduledAt ?? row.surveySubmittedAt ?? row.releasedAt);
   return {
     machineId: row.machineId,
     result,
-    nameplate: nameplateSupply(surveyData),
+    nameplate: nameplateSupply(row.surveySupply),
     /** The disclosure, landed-cost basis and thermal states as kept at release; null on drafts and older versions. */
     releaseFacts: parseReleaseFacts(row.releaseFacts),
     askingPriceMinor: row.askingPriceMinor,

@@ -3,7 +3,7 @@ import { notFound } from 'next/navigation';
 import { Card } from '@/components/ui/card';
 import { ConditionBadge } from '@/components/ui/condition-badge';
 import { findCatalogueReport } from '@/db/queries/reports-catalogue';
-import { findReportFindings } from '@/db/queries/report-findings';
+import { findingsOf } from '@/lib/decision/report-findings';
 import { findReportDecisionFacts } from '@/db/queries/report-decision';
 import { assessDisclosure } from '@/lib/decision/disclosure-contradictions';
 import { daysOnMarket, reportCurrency } from '@/lib/decision/report-currency';
@@ -55,12 +55,12 @@ export default async function ReportSummaryPage({
   const canDownload = report.hasAccess || user.role === 'admin';
   // The findings behind the claims are part of the paid report: shown to those who may read it.
   const showsFindings = canDownload || owner;
-  const findings = await findReportFindings(report.id);
-  const facts = await findReportDecisionFacts(report.id);
+  const [facts, readerSupply] = await Promise.all([findReportDecisionFacts(report.id), showsFindings ? findShopSupply(user.id) : null]);
+  const findings = facts ? findingsOf(facts.result) : null;
   // The seller's answers as kept with this version at release, not as the listing reads today.
   const kept = facts && showsFindings ? facts.releaseFacts : null;
   const disclosure = kept?.disclosure ?? null;
-  const shopSupply = facts && showsFindings ? await findShopSupply(user.id) : null;
+  const shopSupply = facts ? readerSupply : null;
   const currency = facts ? reportCurrency(facts.inspectedOn ?? report.releasedAt ?? new Date(), new Date(), facts.validityDays) : null;
 
   return (
