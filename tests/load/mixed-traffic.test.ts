@@ -28,8 +28,8 @@ const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 40);
 // that run the database and the load generator (common practice, no published source).
 const P99_BOUND_MS = 1_000;
 
-type Kind = 'dashboard page' | 'machines page' | 'report page' | 'comparison API' | 'survey autosave' | 'report PDF';
-const KINDS: Kind[] = ['dashboard page', 'machines page', 'report page', 'comparison API', 'survey autosave', 'report PDF'];
+type Kind = 'dashboard page' | 'reports list' | 'report page' | 'comparison API' | 'survey autosave' | 'report PDF';
+const KINDS: Kind[] = ['dashboard page', 'reports list', 'report page', 'comparison API', 'survey autosave', 'report PDF'];
 
 // Filters a dealer narrows the table by; cycled so the database sees different queries.
 const COMPARISON_QUERIES = [
@@ -79,7 +79,7 @@ describe(`load: ${SECONDS} s of mixed traffic at ${RATE} requests a second`, () 
       connections.push({ inspectionId, cookie, version: 1, saves: 0, acknowledged: null, sent: new Map() });
     }
     // Warm each path once: the first PDF is rendered and cached, later ones are served from the cache.
-    for (const path of ['/dashboard', '/machines', `/reports/${reportId}`, '/api/compare', `/api/reports/${reportId}/pdf`]) {
+    for (const path of ['/dashboard', '/reports', `/reports/${reportId}`, '/api/compare', `/api/reports/${reportId}/pdf`]) {
       const response = await fetch(`${APP_URL}${path}`, { headers: { cookie: dealerCookie }, redirect: 'manual', signal: AbortSignal.timeout(120_000) });
       await response.arrayBuffer();
       expect(response.status, `warm-up ${path}`).toBe(200);
@@ -140,7 +140,7 @@ describe(`load: ${SECONDS} s of mixed traffic at ${RATE} requests a second`, () 
         page('/dashboard', 'dashboard page'),
         autosave(),
         comparison(),
-        page('/machines', 'machines page'),
+        page('/reports', 'reports list'),
         comparison(),
         autosave(),
         page(`/reports/${reportId}`, 'report page'),
