@@ -121,6 +121,7 @@ describe('an inspection from listing to released report', () => {
     // The page refreshes without the decision buttons; the outcome stays beside the new state.
     await page.getByText('Nothing to decide now: the survey is with the inspector.').waitFor();
     await page.getByText('Sent back. The survey is open again for the inspector.').waitFor();
+    await screenshot(page, 'journey-review-sent-back');
     await page.close();
     await waitForMail(inspector.email, 'Survey sent back');
 
