@@ -8,6 +8,7 @@ import {
   inspections,
   inspectionStatusEvents,
   machineDisclosures,
+  machineInclusions,
   machines,
   orders,
   reports,
@@ -27,7 +28,7 @@ import { DEMO_LOGINS } from './demo-logins.mjs';
 import { seededRandom, type Random } from './random';
 import { seedDemoPhotos } from './demo-photos';
 import { uploadthingFileStore } from '@/lib/storage/uploadthing-file-store';
-import { ACCESSORY_SETS, CANCEL_REASONS, DISCLOSURES, FEES, LATHE_MODELS, SITE_NOTES, WORKSHOPS } from './scenario';
+import { ACCESSORY_SETS, CANCEL_REASONS, DISCLOSURES, FEES, INCLUSION_SETS, LATHE_MODELS, SITE_NOTES, WORKSHOPS } from './scenario';
 import { demoComparableSales } from './comparable-sales';
 import { demoSurvey, SURVEY_SECTIONS_IN_ORDER } from './demo-survey';
 
@@ -45,6 +46,17 @@ const MACHINE_PLAN: ReadonlyArray<{ status: InspectionStatus | 'none'; count: nu
 ];
 
 const STATUS_PATH: InspectionStatus[] = ['requested', 'booked', 'on_site', 'in_review', 'released'];
+
+/** Four machines in five carry a disclosure and a list of what comes with them, by position. */
+const hasListedExtras = (machineIndex: number) => machineIndex % 5 !== 2;
+const extrasSet = (machineIndex: number) => machineIndex % DISCLOSURES.length;
+
+function listedAccessories(machineIndex: number, picked: string) {
+  if (!hasListedExtras(machineIndex)) return picked;
+  return INCLUSION_SETS[extrasSet(machineIndex)]!.filter((item) => item.condition !== 'missing')
+    .map((item) => item.description)
+    .join('; ');
+}
 
 export async function seedDemo(now = new Date()) {
   const random = seededRandom(20261202);
@@ -138,24 +150,29 @@ export async function seedDemo(now = new Date()) {
           town: workshop.town,
           region: workshop.region,
           askingPriceMinor: askingPrice * 100,
-          accessories: random.pick(ACCESSORY_SETS),
+          // The listing names what comes with the machine where the seller has listed it (below); the pick is
+          // made either way, so the seeded sequence stays as it was.
+          accessories: listedAccessories(machineIndex, random.pick(ACCESSORY_SETS)),
           description: `${model.maker} ${model.model} from ${workshop.name}, in regular use until recently.`,
           listingStatus: plan.status === 'none' && i === 0 ? 'draft' : 'listed',
         })
         .$returningId();
       const machineId = machine!.id;
-      // Four machines in five have the seller's disclosure, answered on the day of listing, so released reports set
-      // the seller's claims beside the findings; chosen by position, not by the seeded random sequence.
+      // Four machines in five have the seller's disclosure, answered on the day of listing, and the list of what
+      // comes with them, so released reports set the seller's claims beside the findings and price the tooling;
+      // chosen by position, not by the seeded random sequence.
       const disclose = async (listedAt: Date) => {
-        if (machineIndex % 5 === 2) return;
+        if (!hasListedExtras(machineIndex)) return;
+        const set = extrasSet(machineIndex);
         await db.insert(machineDisclosures).values({
           machineId,
-          ...DISCLOSURES[machineIndex % DISCLOSURES.length]!,
+          ...DISCLOSURES[set]!,
           supplyVoltage: model.phases === 1 ? 230 : 400,
           supplyPhases: model.phases,
           createdAt: listedAt,
           updatedAt: listedAt,
         });
+        await db.insert(machineInclusions).values(INCLUSION_SETS[set]!.map((item) => ({ machineId, ...item, currency: 'EUR' })));
       };
       // Listed some days before the inspection was asked for, so demo listings show their days on the
       // market (a spread of its own, leaving the seeded random sequence, and so the demo data, as it was).

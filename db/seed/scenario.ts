@@ -99,3 +99,31 @@ export const DISCLOSURES = [
     saleTerm: 'as-is',
   },
 ] as const;
+
+/**
+ * What comes with the machine, one set per answer set above (invented replacement costs, euro cents).
+ * "missing" marks an item the machine should have and lacks, so its replacement is a cost to the buyer.
+ */
+export const INCLUSION_SETS = [
+  [
+    { kind: 'chuck', description: '3-jaw chuck, 160 mm', condition: 'good', replacementCostMinor: 42_000 },
+    { kind: 'faceplate', description: 'Faceplate, 300 mm', condition: 'usable', replacementCostMinor: 18_000 },
+    { kind: 'steady-rest', description: 'Fixed steady', condition: 'good', replacementCostMinor: 35_000 },
+    { kind: 'tool-post', description: 'Quick-change tool post with 5 holders', condition: 'good', replacementCostMinor: 48_000 },
+  ],
+  [
+    { kind: 'chuck', description: '3-jaw chuck, 200 mm', condition: 'usable', replacementCostMinor: 55_000 },
+    { kind: 'steady-rest', description: 'Fixed steady', condition: 'worn', replacementCostMinor: 35_000 },
+    { kind: 'travelling-rest', description: 'Travelling steady', condition: 'missing', replacementCostMinor: 28_000 },
+    { kind: 'dro', description: 'Two-axis digital readout', condition: 'usable', replacementCostMinor: 90_000 },
+  ],
+  [
+    { kind: 'chuck', description: '3-jaw chuck, 125 mm', condition: 'good', replacementCostMinor: 32_000 },
+    { kind: 'collets', description: '5C collets, 20 sizes, with closer', condition: 'usable', replacementCostMinor: 60_000 },
+    { kind: 'manuals', description: 'Maker’s manual and parts list', condition: 'good', replacementCostMinor: null },
+  ],
+  [
+    { kind: 'chuck', description: '3-jaw chuck, 160 mm', condition: 'worn', replacementCostMinor: 42_000 },
+    { kind: 'tool-post', description: '4-way tool post', condition: 'usable', replacementCostMinor: 15_000 },
+  ],
+] as const;
