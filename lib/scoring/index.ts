@@ -23,7 +23,7 @@ export type {
   MachineSummary,
 } from './result';
 export { CHECK_BANDS, BAND_TABLE, bandFor, type CheckBand, type BandDefinition } from './grading/bands';
-export { CONDITION_GRADES, CONDITION_SCALE, gradeForScore, type ConditionGrade } from './grading/condition-scale';
+export { CONDITION_GRADES, CONDITION_SCALE, gradeForScore, shownScore, type ConditionGrade } from './grading/condition-scale';
 export { SUBSYSTEMS, SUBSYSTEM_TABLE, type SubsystemId } from './subsystems';
 export { LATHE_CHECKS } from './lathe/lathe-checks';
 export { LATHE_LIMITS, SWING_CLASSES, bedStraightnessLimitMm, classFactor } from './limits/lathe-limits';

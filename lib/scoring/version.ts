@@ -2,7 +2,8 @@
  * Versions stamped on every graded result. The app stores both beside each report so a released
  * report can always be traced to the exact rules that produced it (a correction is a new version).
  * Bump SCORING_VERSION whenever a limit, band edge, weight, cost or formula changes (the minor or
- * major part), or only the wording of an explanation (the patch part, as in 1.1.1: "1 of 1 check").
+ * major part), or only the wording of an explanation (the patch part, as in 1.1.1: "1 of 1 check", and
+ * subsystem and overall scores given in full, two decimals, so none reads across a grade's edge).
  */
 export const SCORING_VERSION = '1.1.1';
 

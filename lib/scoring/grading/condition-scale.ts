@@ -1,3 +1,5 @@
+import { roundTo } from '../format-number';
+
 /**
  * The appraisers' condition scale [src: machinery-appraisal condition terms] and the score
  * (0–100) at which each grade begins. The score edges are a Waygrade rule (common practice).
@@ -13,6 +15,17 @@ export const CONDITION_SCALE: readonly { grade: ConditionGrade; fromScore: numbe
   { grade: 'Poor', fromScore: 25, meaning: 'major repairs needed before productive use' },
   { grade: 'Salvage', fromScore: 0, meaning: 'worth its parts or scrap more than its use' },
 ];
+
+/**
+ * A score as it is shown: cut, not rounded, to `digits` decimals. The grade edges are whole numbers,
+ * so a score cut at any number of decimals stays on the same side of every edge: 87.96 shows as 87.9
+ * or 87 and reads "Very good", never as 88.0 beside a scale that starts "Excellent" at 88. The cut is
+ * taken after rounding away binary noise (0.29 × 100 is 28.999…), at 6 decimals (common practice).
+ */
+export function shownScore(score: number, digits = 0): number {
+  const scale = 10 ** digits;
+  return Math.floor(roundTo(score * scale, 6)) / scale;
+}
 
 export function gradeForScore(score: number): ConditionGrade {
   for (const g of CONDITION_SCALE) if (score >= g.fromScore) return g.grade;

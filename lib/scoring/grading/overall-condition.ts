@@ -18,9 +18,10 @@ export function overallCondition(subsystems: readonly SubsystemResult[]): Scorin
   const worst = assessed.reduce((a, b) => (b.score! < a.score! ? b : a));
   const score = roundTo((0.7 * mean + 0.3 * worst.score!), 2);
   const condition = gradeForScore(score);
+  // The score in full (two decimals, as graded and stored): a rounded figure could read across a grade's edge.
   return {
     score,
     condition,
-    explanation: `score = 0.7 × weighted subsystem mean ${fmt(mean, 1)} + 0.3 × worst subsystem (${worst.label}) ${fmt(worst.score!, 1)} = ${fmt(score, 1)} → ${condition}; ${assessed.length} of ${subsystems.length} subsystems assessed.`,
+    explanation: `score = 0.7 × weighted subsystem mean ${fmt(mean, 1)} + 0.3 × worst subsystem (${worst.label}) ${fmt(worst.score!, 2)} = ${fmt(score, 2)} → ${condition}; ${assessed.length} of ${subsystems.length} subsystems assessed.`,
   };
 }

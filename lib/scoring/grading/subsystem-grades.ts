@@ -44,6 +44,7 @@ export function gradeSubsystems(checks: readonly CheckResult[]): SubsystemResult
       continue;
     }
     const mean = weightedSum / totalWeight;
+    // The explanation gives the score in full (two decimals, as graded): a rounded one could cross a grade's edge.
     const score = roundTo((0.5 * mean + 0.5 * worst.score!), 2);
     results.push({
       id,
@@ -53,7 +54,7 @@ export function gradeSubsystems(checks: readonly CheckResult[]): SubsystemResult
       measuredChecks: measuredCount,
       totalChecks: total,
       worstCheckId: worst.id,
-      explanation: `score = ½ × weighted mean ${fmt(mean, 1)} + ½ × worst (${worst.label}) ${fmt(worst.score!, 1)} = ${fmt(score, 1)}; ${measuredCount} of ${total} ${total === 1 ? 'check' : 'checks'} measured.`,
+      explanation: `score = ½ × weighted mean ${fmt(mean, 1)} + ½ × worst (${worst.label}) ${fmt(worst.score!, 1)} = ${fmt(score, 2)}; ${measuredCount} of ${total} ${total === 1 ? 'check' : 'checks'} measured.`,
     });
   }
   return results;
