@@ -5,6 +5,7 @@ import type { Database } from '@/db/client';
 import type { ScoringResult } from '@/lib/scoring';
 import { newVerificationCode } from '@/lib/verification-code';
 import { collectReleaseFacts } from './release-facts';
+import { shownScore } from '@/lib/scoring/grading/condition-scale';
 
 type Writer = Pick<Database, 'insert' | 'select' | 'update'>;
 
@@ -30,7 +31,8 @@ export async function insertDraftReport(
     surveyVersion: input.surveyVersion,
     result,
     overallCondition: result.overall.condition ?? 'Salvage',
-    overallScore: Math.round(result.overall.score ?? 0),
+    // Stored as shown (cut, not rounded), so the figure beside the grade never crosses its edge.
+    overallScore: shownScore(result.overall.score ?? 0),
     confidence: result.confidence.value.toFixed(3),
     safetyFindings: result.safetyFindings.length,
     fairMarketValueMinor: result.valuation.reconciliation?.fairMarketValue.amountMinor ?? result.valuation.costApproach?.fairMarketValue.amountMinor ?? null,
@@ -57,7 +59,7 @@ async function replaceSubsystemScores(tx: Pick<Database, 'insert' | 'delete'>, r
     result.subsystems.map((s) => ({
       reportId,
       subsystem: s.id,
-      score: s.score === null ? null : Math.round(s.score),
+      score: s.score === null ? null : shownScore(s.score),
       grade: s.grade,
     })),
   );

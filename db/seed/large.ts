@@ -12,6 +12,7 @@ import { newVerificationCode } from '@/lib/verification-code';
 import { demoSurvey } from './demo-survey';
 import { seededRandom } from './random';
 import { LATHE_MODELS, WORKSHOPS } from './scenario';
+import { shownScore } from '@/lib/scoring/grading/condition-scale';
 
 const CHUNK = 250;
 // Each report carries its full result (about 20 KB of JSON): insert them in small batches.
@@ -123,7 +124,7 @@ export async function seedLarge(total: number, log = console.log) {
       surveyVersion: 1,
       result,
       overallCondition: result.overall.condition ?? 'Salvage',
-      overallScore: Math.round(result.overall.score ?? 0),
+      overallScore: shownScore(result.overall.score ?? 0),
       confidence: result.confidence.value.toFixed(3),
       safetyFindings: result.safetyFindings.length,
       fairMarketValueMinor: result.valuation.reconciliation?.fairMarketValue.amountMinor ?? result.valuation.costApproach?.fairMarketValue.amountMinor ?? null,
@@ -139,7 +140,7 @@ export async function seedLarge(total: number, log = console.log) {
     }
     await db.insert(reportSubsystemScores).values(
       results.flatMap((result, i) =>
-        result.subsystems.map((s) => ({ reportId: reportIds[i]!.id, subsystem: s.id, score: s.score === null ? null : Math.round(s.score), grade: s.grade })),
+        result.subsystems.map((s) => ({ reportId: reportIds[i]!.id, subsystem: s.id, score: s.score === null ? null : shownScore(s.score), grade: s.grade })),
       ),
     );
     log(`Large data set: ${offset + size} of ${total} machines (${Math.round((Date.now() - started) / 1000)} s)`);

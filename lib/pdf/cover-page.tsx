@@ -7,6 +7,7 @@ import { FramedPage, WaygradeMark, type FrameFacts } from './page-frame';
 import { pdfText } from './pdf-text';
 import type { ReportDocumentData } from './report-document-data';
 import { COLOURS, styles } from './theme';
+import { shownScore } from '@/lib/scoring/grading/condition-scale';
 
 const LATHE_KIND_WORDS = { general_purpose: 'general-purpose centre lathe', toolroom: 'toolroom centre lathe' } as const;
 
@@ -60,7 +61,7 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
           <Text style={styles.factLabel}>Overall condition</Text>
           <Text style={{ fontSize: 26, fontWeight: 600, color: gradeColour(grade), lineHeight: 1.15 }}>{grade ?? 'Not graded'}</Text>
           <Text style={{ ...styles.figures, fontSize: 10, marginBottom: 8 }}>
-            {r.overall.score === null ? 'No score' : `Score ${r.overall.score.toFixed(1)} of 100`}
+            {r.overall.score === null ? 'No score' : `Score ${shownScore(r.overall.score, 1).toFixed(1)} of 100`}
           </Text>
           <ConditionScaleMark grade={grade} width={250} />
           <Text style={{ ...styles.factLabel, marginTop: 10 }}>Confidence</Text>
@@ -118,7 +119,7 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
             <View style={{ width: `${Math.max(0, Math.min(100, s.score ?? 0))}%`, height: 6, backgroundColor: gradeColour(s.grade) }} />
           </View>
           <Text style={{ width: 60, fontWeight: 600, color: gradeColour(s.grade) }}>{s.grade ?? 'Not assessed'}</Text>
-          <Text style={{ width: 50, textAlign: 'right', ...styles.figures }}>{s.score === null ? '—' : `${s.score.toFixed(1)} / 100`}</Text>
+          <Text style={{ width: 50, textAlign: 'right', ...styles.figures }}>{s.score === null ? '—' : `${shownScore(s.score, 1).toFixed(1)} / 100`}</Text>
           <Text style={{ width: 97, textAlign: 'right', color: COLOURS.inkSoft, ...styles.figures }}>
             {s.measuredChecks} of {s.totalChecks} check{s.totalChecks === 1 ? '' : 's'}
           </Text>

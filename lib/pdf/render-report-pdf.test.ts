@@ -78,7 +78,8 @@ describe('renderReportPdf', () => {
   });
 
   it('prints the overall grade, every subsystem grade and the confidence', () => {
-    expect(text).toContain(`Score ${result.overall.score!.toFixed(1)} of 100`);
+    // Cut, not rounded, to one decimal: the stored two decimals with the last one dropped (58.46 prints 58.4).
+    expect(text).toContain(`Score ${result.overall.score!.toFixed(2).slice(0, -1)} of 100`);
     expect(text).toContain(result.overall.condition!);
     for (const s of result.subsystems) expect(text).toContain(s.label);
     expect(text).toContain(`${Math.round(result.confidence.value * 100)} % of the check weight measured`);

@@ -10,6 +10,7 @@ import { pdfText } from './pdf-text';
 import type { ReportDocumentData } from './report-document-data';
 import { COLOURS, styles } from './theme';
 import { ThermalStatesBlock } from './thermal-states-block';
+import { shownScore } from '@/lib/scoring/grading/condition-scale';
 
 /** One subsystem: its grade, how it was reached, every check, and the plots that belong to it. */
 export function SubsystemPage({
@@ -38,7 +39,7 @@ export function SubsystemPage({
         <View style={{ alignItems: 'flex-end' }}>
           <Text style={{ fontSize: 15, fontWeight: 600, lineHeight: 1.2, color: gradeColour(subsystem.grade) }}>{subsystem.grade ?? 'Not assessed'}</Text>
           <Text style={{ ...styles.small, ...styles.figures }}>
-            {subsystem.score === null ? 'no score' : `score ${subsystem.score.toFixed(1)} of 100`} · {subsystem.measuredChecks} of {subsystem.totalChecks} check{subsystem.totalChecks === 1 ? '' : 's'} measured
+            {subsystem.score === null ? 'no score' : `score ${shownScore(subsystem.score, 1).toFixed(1)} of 100`} · {subsystem.measuredChecks} of {subsystem.totalChecks} check{subsystem.totalChecks === 1 ? '' : 's'} measured
           </Text>
         </View>
       </View>

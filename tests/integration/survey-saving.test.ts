@@ -146,6 +146,10 @@ describe('survey submission', () => {
 
     const [report] = await db.select().from(reports).where(eq(reports.inspectionId, inspectionId));
     expect(report).toMatchObject({ status: 'draft', scoringVersion: SCORING_VERSION, surveyVersion: 2, inspectorId: inspector.id });
+    // The overall score is stored cut to whole points, as shown beside its grade (95.51 is stored as 95, not 96).
+    const result = (typeof report!.result === 'string' ? JSON.parse(report!.result) : report!.result) as { overall: { score: number } };
+    expect(result.overall.score % 1).toBeGreaterThanOrEqual(0.5);
+    expect(report!.overallScore).toBe(Math.floor(result.overall.score));
     const [inspection] = await db.select().from(inspections).where(eq(inspections.id, inspectionId));
     expect(inspection!.status).toBe('in_review');
     const events = await db.select().from(inspectionStatusEvents).where(eq(inspectionStatusEvents.inspectionId, inspectionId));

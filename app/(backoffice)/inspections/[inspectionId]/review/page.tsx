@@ -16,6 +16,7 @@ import type { ScoringResult } from '@/lib/scoring';
 import { ReviewActions } from './review-actions';
 import { BedPlotsCard, NotInspectedCard, ReviewDealBreakers, ReviewDisclosure } from './review-findings';
 import { SurveyReadings } from './survey-readings';
+import { shownScore } from '@/lib/scoring/grading/condition-scale';
 
 export const metadata: Metadata = { title: 'Review' };
 
@@ -93,7 +94,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ inspect
                         <th scope="row" className="py-2 pr-3 font-medium">
                           {s.label}
                         </th>
-                        <td className="figures py-2 pr-3">{s.score === null ? '—' : Math.round(s.score)}</td>
+                        <td className="figures py-2 pr-3">{s.score === null ? '—' : shownScore(s.score)}</td>
                         <td className="py-2 pr-3">{s.grade ?? 'Not graded'}</td>
                         <td className="figures py-2 text-sm text-ink-soft">
                           {s.measuredChecks}/{s.totalChecks} measured
