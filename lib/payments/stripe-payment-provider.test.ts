@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { payOnCheckoutPage, reportPurchaseParams, startPaymentsHarness, type PaymentsHarness } from '@/services/payments/test-support/payments-harness';
+import { paidPaymentIntentId, startPaymentsHarness, type PaymentsHarness } from '@/services/payments/test-support/payments-harness';
 import { stripePaymentProvider } from './stripe-payment-provider';
 
 // The refund call through the real SDK against the local payments stand-in, which replays a repeated
@@ -11,11 +11,7 @@ describe('refunds through the payment provider', () => {
   });
   afterAll(() => harness.close());
 
-  async function paidIntentId(): Promise<string> {
-    const session = await harness.stripe.checkout.sessions.create(reportPurchaseParams());
-    await payOnCheckoutPage(session);
-    return String((await harness.stripe.checkout.sessions.retrieve(session.id)).payment_intent);
-  }
+  const paidIntentId = () => paidPaymentIntentId(harness.stripe);
 
   it('refunds a payment once, however often the refund is asked for', async () => {
     const provider = stripePaymentProvider(harness.stripe);

@@ -1,8 +1,7 @@
 import Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
-  payOnCheckoutPage,
-  reportPurchaseParams,
+  paidPaymentIntentId,
   startPaymentsHarness,
   TEST_WEBHOOK_SECRET,
   type PaymentsHarness,
@@ -15,11 +14,7 @@ describe('refunds API', () => {
   });
   afterAll(() => harness.close());
 
-  async function paidIntentId(): Promise<string> {
-    const session = await harness.stripe.checkout.sessions.create(reportPurchaseParams());
-    await payOnCheckoutPage(session);
-    return String((await harness.stripe.checkout.sessions.retrieve(session.id)).payment_intent);
-  }
+  const paidIntentId = () => paidPaymentIntentId(harness.stripe);
 
   it('refunds the whole payment by default and can be retrieved', async () => {
     const paymentIntent = await paidIntentId();

@@ -75,6 +75,13 @@ export async function payOnCheckoutPage(session: Stripe.Checkout.Session, email?
   });
 }
 
+/** A report purchase paid on the checkout page: the id of its payment intent. */
+export async function paidPaymentIntentId(stripe: Stripe): Promise<string> {
+  const session = await stripe.checkout.sessions.create(reportPurchaseParams());
+  await payOnCheckoutPage(session);
+  return String((await stripe.checkout.sessions.retrieve(session.id)).payment_intent);
+}
+
 /** The page URL says localhost for browsers; tests reach the same port on 127.0.0.1. */
 function standInOrigin(pageUrl: URL): string {
   return `http://127.0.0.1:${pageUrl.port}`;
