@@ -9,6 +9,7 @@ import {
   inspectionStatusEvents,
   machineDisclosures,
   machineInclusions,
+  machineMovingSheets,
   machines,
   orders,
   reports,
@@ -23,6 +24,7 @@ import { insertDraftReport, releaseDraftReport } from '@/db/queries/report-write
 import { loadScoreOptions } from '@/db/queries/scoring-inputs';
 import { defaultRepairCostCatalogue, scoreSurvey, SURVEY_FORMAT_VERSION, type LatheSurvey } from '@/lib/scoring';
 import { hashPassword } from '@/lib/auth/password';
+import { SITE_ACCESS } from '@/lib/decision/rigging-estimate';
 import { sizeClassForSwing } from '@/lib/machine-size';
 import { DEMO_LOGINS } from './demo-logins.mjs';
 import { seededRandom, type Random } from './random';
@@ -130,6 +132,9 @@ export async function seedDemo(now = new Date()) {
       const ageYears = now.getUTCFullYear() - yearBuilt;
       const basePrice = model.swingMm * 60 * (model.kind === 'toolroom' ? 1.8 : 1);
       const askingPrice = Math.round((basePrice * Math.max(0.25, 1 - ageYears / 60)) / 50) * 50;
+      // Drawn in the order the seeded sequence has always drawn them: serial, centres, then the accessories.
+      const serialNumber = `${model.maker.slice(0, 2).toUpperCase()}${random.int(10000, 99999)}`;
+      const centresMm = random.pick(model.centres);
       const [machine] = await db
         .insert(machines)
         .values({
@@ -138,10 +143,10 @@ export async function seedDemo(now = new Date()) {
           latheKind: model.kind,
           maker: model.maker,
           model: model.model,
-          serialNumber: `${model.maker.slice(0, 2).toUpperCase()}${random.int(10000, 99999)}`,
+          serialNumber,
           yearBuilt,
           swingMm: model.swingMm,
-          betweenCentresMm: random.pick(model.centres),
+          betweenCentresMm: centresMm,
           spindleBoreMm: model.boreMm,
           motorKw: model.motorKw.toFixed(2),
           supplyVoltage: model.phases === 1 ? 230 : 400,
@@ -173,6 +178,20 @@ export async function seedDemo(now = new Date()) {
           updatedAt: listedAt,
         });
         await db.insert(machineInclusions).values(INCLUSION_SETS[set]!.map((item) => ({ machineId, ...item, currency: 'EUR' })));
+        // The riggers' sheet, but for the home garage (set 3), whose seller has not weighed it: the landed cost then
+        // says rigging is not known. Weight grows by half the short-bed weight per extra metre between centres.
+        if (set === 3) return;
+        await db.insert(machineMovingSheets).values({
+          machineId,
+          weightKg: Math.round(model.weightKg * (1 + (centresMm - model.centres[0]) / 2000) / 10) * 10,
+          lengthMm: centresMm + 1200,
+          widthMm: model.swingMm * 2 + 300,
+          heightMm: 1250 + model.swingMm,
+          heavyEnd: 'headstock',
+          siteAccess: SITE_ACCESS[set === 1 ? 1 : 0]!,
+          accessNotes: set === 1 ? 'Two steps down to the yard; pallet truck on site.' : null,
+          updatedAt: listedAt,
+        });
       };
       // Listed some days before the inspection was asked for, so demo listings show their days on the
       // market (a spread of its own, leaving the seeded random sequence, and so the demo data, as it was).

@@ -15,18 +15,18 @@ export const WORKSHOPS = [
   { name: 'Waygrade Inspection Office', town: 'Marrowgate', region: 'Brenmark', postcode: 'BK9 1AA' },
 ] as const;
 
-/** Invented makers and models with their sizes (mm) and motor power (kW). */
+/** Invented makers and models with their sizes (mm), motor power (kW) and weight on the shortest bed (kg). */
 export const LATHE_MODELS = [
-  { maker: 'Corvane', model: 'CL-280', kind: 'general_purpose', swingMm: 280, centres: [500, 750], boreMm: 26, motorKw: 1.1, phases: 1 },
-  { maker: 'Corvane', model: 'CL-330', kind: 'general_purpose', swingMm: 330, centres: [750, 1000], boreMm: 38, motorKw: 2.2, phases: 3 },
-  { maker: 'Tallis & Wren', model: 'Model 13', kind: 'general_purpose', swingMm: 330, centres: [600, 1000], boreMm: 35, motorKw: 1.5, phases: 3 },
-  { maker: 'Tallis & Wren', model: 'Model 17 Toolroom', kind: 'toolroom', swingMm: 430, centres: [750], boreMm: 41, motorKw: 3, phases: 3 },
-  { maker: 'Oldreth', model: 'T400', kind: 'general_purpose', swingMm: 400, centres: [1000, 1500], boreMm: 52, motorKw: 5.5, phases: 3 },
-  { maker: 'Oldreth', model: 'T560', kind: 'general_purpose', swingMm: 560, centres: [1500, 2000, 3000], boreMm: 80, motorKw: 7.5, phases: 3 },
-  { maker: 'Vantor', model: 'Meridian 360', kind: 'general_purpose', swingMm: 360, centres: [1000], boreMm: 42, motorKw: 3, phases: 3 },
-  { maker: 'Kessmark', model: 'KZ-250 Toolroom', kind: 'toolroom', swingMm: 250, centres: [500], boreMm: 26, motorKw: 0.75, phases: 1 },
-  { maker: 'Ambrell', model: 'Series 5/460', kind: 'general_purpose', swingMm: 460, centres: [1000, 1500], boreMm: 58, motorKw: 5.5, phases: 3 },
-  { maker: 'Ambrell', model: 'Series 9/850', kind: 'general_purpose', swingMm: 850, centres: [3000], boreMm: 105, motorKw: 15, phases: 3 },
+  { maker: 'Corvane', model: 'CL-280', kind: 'general_purpose', swingMm: 280, centres: [500, 750], boreMm: 26, motorKw: 1.1, phases: 1, weightKg: 320 },
+  { maker: 'Corvane', model: 'CL-330', kind: 'general_purpose', swingMm: 330, centres: [750, 1000], boreMm: 38, motorKw: 2.2, phases: 3, weightKg: 640 },
+  { maker: 'Tallis & Wren', model: 'Model 13', kind: 'general_purpose', swingMm: 330, centres: [600, 1000], boreMm: 35, motorKw: 1.5, phases: 3, weightKg: 760 },
+  { maker: 'Tallis & Wren', model: 'Model 17 Toolroom', kind: 'toolroom', swingMm: 430, centres: [750], boreMm: 41, motorKw: 3, phases: 3, weightKg: 1450 },
+  { maker: 'Oldreth', model: 'T400', kind: 'general_purpose', swingMm: 400, centres: [1000, 1500], boreMm: 52, motorKw: 5.5, phases: 3, weightKg: 1850 },
+  { maker: 'Oldreth', model: 'T560', kind: 'general_purpose', swingMm: 560, centres: [1500, 2000, 3000], boreMm: 80, motorKw: 7.5, phases: 3, weightKg: 3100 },
+  { maker: 'Vantor', model: 'Meridian 360', kind: 'general_purpose', swingMm: 360, centres: [1000], boreMm: 42, motorKw: 3, phases: 3, weightKg: 1300 },
+  { maker: 'Kessmark', model: 'KZ-250 Toolroom', kind: 'toolroom', swingMm: 250, centres: [500], boreMm: 26, motorKw: 0.75, phases: 1, weightKg: 470 },
+  { maker: 'Ambrell', model: 'Series 5/460', kind: 'general_purpose', swingMm: 460, centres: [1000, 1500], boreMm: 58, motorKw: 5.5, phases: 3, weightKg: 2300 },
+  { maker: 'Ambrell', model: 'Series 9/850', kind: 'general_purpose', swingMm: 850, centres: [3000], boreMm: 105, motorKw: 15, phases: 3, weightKg: 7600 },
 ] as const;
 
 export const ACCESSORY_SETS = [
