@@ -3,6 +3,7 @@ import { and, desc, eq, gte, like, lt, or, type SQL } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { auditEvents, users } from '@/db/schema';
 import type { AuditFilters } from '@/lib/validation/list-filters';
+import { containsPattern } from './like-pattern';
 
 export const AUDIT_PAGE_SIZE = 50;
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -11,7 +12,7 @@ function auditWhere(filters: AuditFilters): SQL | undefined {
   const conditions: SQL[] = [];
   if (filters.actor) {
     // An id matches exactly; anything else is looked for in names and addresses.
-    const pattern = `%${filters.actor.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    const pattern = containsPattern(filters.actor);
     conditions.push(or(eq(auditEvents.actorId, filters.actor), like(users.email, pattern), like(users.name, pattern))!);
   }
   if (filters.entity) conditions.push(eq(auditEvents.entityType, filters.entity));

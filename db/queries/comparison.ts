@@ -9,6 +9,7 @@ import { CONVERTER_SIZING_FACTOR, DEMO_CONVERTER_COSTS, VOLTAGE_TOLERANCE, type 
 import { DEFAULT_VALIDITY_DAYS, reportCurrency, type ReportCurrency } from '@/lib/decision/report-currency';
 import { SUBSYSTEMS } from '@/lib/scoring/subsystems';
 import { SUBSYSTEM_KEY_LIST, SUBSYSTEM_KEYS, type ComparisonFilters, type ComparisonQuery, type SortColumn, type SubsystemKey } from '@/lib/validation/comparison-query';
+import { containsPattern } from './like-pattern';
 
 // The one query behind the comparison table: the API's pages, the CSV export and the benchmark's
 // bare-SQL measurement all build it here, so what is measured is what is served. It reads
@@ -212,7 +213,7 @@ function whereFor(filters: ComparisonFilters, details: Details, viewer: Comparis
     if (values) conditions.push(inArray(column, values.map((value, i) => b.bind(`${name}.${i}`, value))));
   };
   if (filters.q) {
-    const pattern = b.bind('q', `%${filters.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`);
+    const pattern = b.bind('q', containsPattern(filters.q));
     conditions.push(or(like(e.maker, pattern), like(e.model, pattern), like(sql`concat(${e.maker}, ' ', ${e.model})`, pattern)));
   }
   oneOf(e.latheKind, 'kind', filters.kind);

@@ -4,6 +4,7 @@ import { alias } from 'drizzle-orm/mysql-core';
 import { db } from '@/db/client';
 import { users, workshops } from '@/db/schema';
 import type { PeopleFilters } from '@/lib/validation/list-filters';
+import { containsPattern } from './like-pattern';
 
 export const PEOPLE_PAGE_SIZE = 25;
 
@@ -16,14 +17,10 @@ const STATE_CONDITIONS = {
   deactivated: () => isNotNull(users.deactivatedAt),
 } as const;
 
-function escapeLike(text: string) {
-  return text.replace(/[\\%_]/g, (c) => `\\${c}`);
-}
-
 function peopleWhere(filters: PeopleFilters): SQL | undefined {
   const conditions: SQL[] = [];
   if (filters.q) {
-    const pattern = `%${escapeLike(filters.q)}%`;
+    const pattern = containsPattern(filters.q);
     conditions.push(or(like(users.name, pattern), like(users.email, pattern), like(workshops.name, pattern))!);
   }
   if (filters.role) conditions.push(eq(users.role, filters.role));
