@@ -1,7 +1,12 @@
 import 'server-only';
-import { and, desc, eq, isNull, sql } from 'drizzle-orm';
+import { and, count, desc, eq, isNull, like, or, sql } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { inspectionFees, machines, reportAccessGrants, reports } from '@/db/schema';
+import type { CatalogueFilters } from '@/lib/validation/list-filters';
+import { containsPattern } from './like-pattern';
+
+/** Machines per page of the catalogue: a dozen rows of two cards. */
+export const CATALOGUE_PAGE_SIZE = 24;
 
 /** What anyone browsing may see of a report: the machine and its overall condition, nothing bought. */
 const catalogueColumns = {
@@ -36,18 +41,32 @@ function accessibleInspections(userId: string) {
     .as('accessible');
 }
 
-/** The current released version of every inspected machine, newest first, with the fee to buy it. */
-export async function listCatalogueReports(userId: string) {
+/**
+ * One page of the current released version of every inspected machine, newest first, with the fee to
+ * buy it, and how many there are in all; `q` looks for a maker or model.
+ */
+export async function listCatalogueReports(userId: string, filters: CatalogueFilters) {
   const accessible = accessibleInspections(userId);
-  const rows = await db
-    .select({ ...catalogueColumns, hasAccess: sql<number>`${accessible.inspectionId} is not null` })
-    .from(reports)
-    .innerJoin(machines, eq(machines.id, reports.machineId))
-    .leftJoin(inspectionFees, and(eq(inspectionFees.machineType, machines.machineType), eq(inspectionFees.sizeClass, machines.sizeClass)))
-    .leftJoin(accessible, eq(accessible.inspectionId, reports.inspectionId))
-    .where(and(eq(reports.status, 'released'), isNull(reports.supersededById)))
-    .orderBy(desc(reports.releasedAt), desc(reports.id));
-  return rows.map((row) => ({ ...row, hasAccess: Boolean(Number(row.hasAccess)) }));
+  const pattern = filters.q ? containsPattern(filters.q) : null;
+  const where = and(
+    eq(reports.status, 'released'),
+    isNull(reports.supersededById),
+    pattern ? or(like(machines.maker, pattern), like(machines.model, pattern), like(sql`concat(${machines.maker}, ' ', ${machines.model})`, pattern)) : undefined,
+  );
+  const [rows, [total]] = await Promise.all([
+    db
+      .select({ ...catalogueColumns, hasAccess: sql<number>`${accessible.inspectionId} is not null` })
+      .from(reports)
+      .innerJoin(machines, eq(machines.id, reports.machineId))
+      .leftJoin(inspectionFees, and(eq(inspectionFees.machineType, machines.machineType), eq(inspectionFees.sizeClass, machines.sizeClass)))
+      .leftJoin(accessible, eq(accessible.inspectionId, reports.inspectionId))
+      .where(where)
+      .orderBy(desc(reports.releasedAt), desc(reports.id))
+      .limit(CATALOGUE_PAGE_SIZE)
+      .offset((filters.page - 1) * CATALOGUE_PAGE_SIZE),
+    db.select({ total: count() }).from(reports).innerJoin(machines, eq(machines.id, reports.machineId)).where(where),
+  ]);
+  return { rows: rows.map((row) => ({ ...row, hasAccess: Boolean(Number(row.hasAccess)) })), total: total?.total ?? 0 };
 }
 
 /** One released report's open summary, or null when it is not (or no longer) for sale. */

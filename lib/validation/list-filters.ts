@@ -41,3 +41,7 @@ export const auditFiltersSchema = z.object({
   page,
 });
 export type AuditFilters = z.output<typeof auditFiltersSchema>;
+
+/** The reports catalogue: a maker or model to look for, and the page. */
+export const catalogueFiltersSchema = z.object({ q: optionalText(100), page });
+export type CatalogueFilters = z.output<typeof catalogueFiltersSchema>;

@@ -35,6 +35,11 @@ describe('buying a report', () => {
     const page = await buyerBrowser.newPage();
     await signIn(page, buyer.email, buyer.password);
     await page.goto('/reports');
+    await page.getByLabel('Maker or model').fill(model);
+    await page.getByRole('button', { name: 'Search' }).click();
+    await page.waitForURL(/\/reports\?q=/);
+    await page.getByText('1 machine', { exact: true }).waitFor();
+    await screenshot(page, 'reports-catalogue-search');
     await page.getByRole('link', { name: `Corvane ${model}` }).click();
     await page.waitForURL(`**/reports/${reportId}`);
     await page.getByRole('heading', { name: 'In the full report' }).waitFor();

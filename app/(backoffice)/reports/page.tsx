@@ -1,19 +1,34 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { Pager } from '@/components/data-table/pager';
 import { ConditionBadge } from '@/components/ui/condition-badge';
 import { EmptyState } from '@/components/ui/empty-state';
-import { listCatalogueReports } from '@/db/queries/reports-catalogue';
+import { CATALOGUE_PAGE_SIZE, listCatalogueReports } from '@/db/queries/reports-catalogue';
 import { requirePageSession } from '@/lib/auth/session';
 import { formatDate, formatMm, formatMoney } from '@/lib/format';
 import { can } from '@/lib/roles';
+import { catalogueFiltersSchema, type CatalogueFilters } from '@/lib/validation/list-filters';
 
 export const metadata: Metadata = { title: 'Inspected machines' };
 
-export default async function ReportsCataloguePage() {
+const COUNT = new Intl.NumberFormat('en-GB');
+
+/** The catalogue's address for a search and page; the defaults are left out. */
+function catalogueHref(filters: CatalogueFilters, page: number) {
+  const params = new URLSearchParams();
+  if (filters.q) params.set('q', filters.q);
+  if (page > 1) params.set('page', String(page));
+  const query = params.toString();
+  return query ? `/reports?${query}` : '/reports';
+}
+
+export default async function ReportsCataloguePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageSession();
   if (!can(user.role, 'report.browse')) notFound();
-  const reports = await listCatalogueReports(user.id);
+  const filters = catalogueFiltersSchema.parse(await searchParams);
+  const { rows: reports, total } = await listCatalogueReports(user.id, filters);
+  const first = (filters.page - 1) * CATALOGUE_PAGE_SIZE + 1;
   return (
     <>
       <p className="text-sm font-semibold uppercase tracking-widest text-copper">Reports</p>
@@ -22,52 +37,96 @@ export default async function ReportsCataloguePage() {
         Every machine here has a released Waygrade report. The overall condition is open to all; the measured checks, photos, repair
         estimate and valuation come with the report.
       </p>
+      <form method="get" action="/reports" role="search" className="mt-6 flex max-w-xl flex-wrap items-end gap-3">
+        <label className="block min-w-0 flex-1">
+          <span className="font-medium">Maker or model</span>
+          <input
+            name="q"
+            type="search"
+            defaultValue={filters.q ?? ''}
+            placeholder="e.g. Corvane CL-330"
+            className="mt-1 block min-h-touch w-full rounded-lg border border-line-strong bg-paper-raised px-3 text-base"
+          />
+        </label>
+        <button type="submit" className="min-h-touch rounded-lg border border-line-strong bg-paper-sunken px-5 font-medium hover:bg-line">
+          Search
+        </button>
+        {filters.q ? (
+          <Link href="/reports" className="flex min-h-touch items-center px-2 font-medium text-ink-soft hover:text-ink">
+            Show all
+          </Link>
+        ) : null}
+      </form>
       {reports.length === 0 ? (
         <div className="mt-8">
-          <EmptyState title="No released reports yet" text="Machines appear here as soon as their report is released." />
+          {filters.q ? (
+            <EmptyState title={`No machine matches “${filters.q}”`} text="Try part of the maker’s name or of the model." />
+          ) : total > 0 ? (
+            <>
+              <EmptyState title="This page is past the last machine" text={`There are ${COUNT.format(total)} machines in all.`} />
+              <Link href={catalogueHref(filters, 1)} className="mt-4 inline-flex min-h-touch items-center font-medium text-copper hover:underline">
+                ← First page
+              </Link>
+            </>
+          ) : (
+            <EmptyState title="No released reports yet" text="Machines appear here as soon as their report is released." />
+          )}
         </div>
       ) : (
-        <ul className="mt-8 grid gap-4 md:grid-cols-2">
-          {reports.map((r) => (
-            <li key={r.id} className="rounded-card border border-line bg-paper-raised p-5 shadow-sm">
-              <div className="flex flex-wrap items-start justify-between gap-3">
-                <div>
-                  <h2 className="text-lg font-semibold">
-                    <Link href={`/reports/${r.id}`} className="hover:text-copper">
-                      {r.maker} {r.model}
-                    </Link>
-                  </h2>
-                  <p className="figures text-sm text-ink-soft">
-                    Swing {formatMm(r.swingMm)} · {formatMm(r.betweenCentresMm)} between centres{r.yearBuilt ? ` · built ${r.yearBuilt}` : ''}
-                  </p>
-                  <p className="text-sm text-ink-soft">
-                    {r.town}, {r.region} · released {formatDate(r.releasedAt)}
-                  </p>
+        <>
+          <p className="figures mt-6 text-sm text-ink-soft">
+            {total <= CATALOGUE_PAGE_SIZE
+              ? `${COUNT.format(total)} ${total === 1 ? 'machine' : 'machines'}`
+              : `${COUNT.format(first)}–${COUNT.format(first + reports.length - 1)} of ${COUNT.format(total)} machines, newest report first`}
+          </p>
+          <ul className="mt-3 grid gap-4 md:grid-cols-2">
+            {reports.map((r) => (
+              <li key={r.id} className="rounded-card border border-line bg-paper-raised p-5 shadow-sm">
+                <div className="flex flex-wrap items-start justify-between gap-3">
+                  <div>
+                    <h2 className="text-lg font-semibold">
+                      <Link href={`/reports/${r.id}`} className="hover:text-copper">
+                        {r.maker} {r.model}
+                      </Link>
+                    </h2>
+                    <p className="figures text-sm text-ink-soft">
+                      Swing {formatMm(r.swingMm)} · {formatMm(r.betweenCentresMm)} between centres{r.yearBuilt ? ` · built ${r.yearBuilt}` : ''}
+                    </p>
+                    <p className="text-sm text-ink-soft">
+                      {r.town}, {r.region} · released {formatDate(r.releasedAt)}
+                    </p>
+                  </div>
+                  <ConditionBadge grade={r.overallCondition} />
                 </div>
-                <ConditionBadge grade={r.overallCondition} />
-              </div>
-              <div className="mt-4 flex flex-wrap items-center justify-between gap-3">
-                <p className="figures text-sm">
-                  {r.hasAccess ? (
-                    <span className="font-medium text-band-true">✓ In your reports</span>
-                  ) : r.feeMinor === null ? (
-                    <span className="text-ink-soft">Fee not set yet</span>
-                  ) : (
-                    <>
-                      Report <span className="font-semibold">{formatMoney(r.feeMinor, r.feeCurrency ?? 'EUR')}</span>
-                    </>
-                  )}
-                </p>
-                <Link
-                  href={`/reports/${r.id}`}
-                  className="inline-flex min-h-touch items-center rounded-lg border border-line-strong px-4 font-medium hover:bg-paper-sunken"
-                >
-                  {r.hasAccess ? 'Open' : 'See summary'}
-                </Link>
-              </div>
-            </li>
-          ))}
-        </ul>
+                <div className="mt-4 flex flex-wrap items-center justify-between gap-3">
+                  <p className="figures text-sm">
+                    {r.hasAccess ? (
+                      <span className="font-medium text-band-true">✓ In your reports</span>
+                    ) : r.feeMinor === null ? (
+                      <span className="text-ink-soft">Fee not set yet</span>
+                    ) : (
+                      <>
+                        Report <span className="font-semibold">{formatMoney(r.feeMinor, r.feeCurrency ?? 'EUR')}</span>
+                      </>
+                    )}
+                  </p>
+                  <Link
+                    href={`/reports/${r.id}`}
+                    className="inline-flex min-h-touch items-center rounded-lg border border-line-strong px-4 font-medium hover:bg-paper-sunken"
+                  >
+                    {r.hasAccess ? 'Open' : 'See summary'}
+                  </Link>
+                </div>
+              </li>
+            ))}
+          </ul>
+          <Pager
+            page={filters.page}
+            hasMore={filters.page * CATALOGUE_PAGE_SIZE < total}
+            href={(page) => catalogueHref(filters, page)}
+            summary={`Page ${COUNT.format(filters.page)} of ${COUNT.format(Math.ceil(total / CATALOGUE_PAGE_SIZE))}`}
+          />
+        </>
       )}
     </>
   );
