@@ -2,16 +2,23 @@ import 'server-only';
 import { and, count, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { inspections, machines, orders, reportAccessGrants, reports, users } from '@/db/schema';
+import type { MachineSearch } from '@/lib/validation/list-filters';
+import { makerOrModelContains } from './like-pattern';
 
-/** A seller's machines with the status of their latest inspection. */
-export async function listSellerMachines(sellerId: string) {
-  const latest = db
-    .select({ machineId: inspections.machineId, id: sql<number>`max(${inspections.id})`.as('latest_id') })
-    .from(inspections)
-    .groupBy(inspections.machineId)
-    .as('latest');
-  return db
-    .select({
+/** Machines per page of a seller's list. */
+export const SELLER_MACHINES_PAGE_SIZE = 25;
+
+/**
+ * One page of a seller's machines, last changed first, with the status of each one's latest
+ * inspection, and how many there are in all; `q` looks for a maker or model.
+ */
+export async function listSellerMachines(sellerId: string, filters: MachineSearch, pageSize = SELLER_MACHINES_PAGE_SIZE) {
+  const where = and(eq(machines.sellerId, sellerId), filters.q ? makerOrModelContains(filters.q) : undefined);
+  // The latest inspection of each machine on the page only, by the machine index.
+  const latestInspection = sql`(select max(${inspections.id}) from ${inspections} where ${inspections.machineId} = ${machines.id})`;
+  const [rows, [total]] = await Promise.all([
+    db
+      .select({
       id: machines.id,
       maker: machines.maker,
       model: machines.model,
@@ -22,11 +29,15 @@ export async function listSellerMachines(sellerId: string) {
       inspectionStatus: inspections.status,
       scheduledAt: inspections.scheduledAt,
     })
-    .from(machines)
-    .leftJoin(latest, eq(latest.machineId, machines.id))
-    .leftJoin(inspections, eq(inspections.id, latest.id))
-    .where(eq(machines.sellerId, sellerId))
-    .orderBy(desc(machines.updatedAt));
+      .from(machines)
+      .leftJoin(inspections, eq(inspections.id, latestInspection))
+      .where(where)
+      .orderBy(desc(machines.updatedAt), desc(machines.id))
+      .limit(pageSize)
+      .offset((filters.page - 1) * pageSize),
+    db.select({ total: count() }).from(machines).where(where),
+  ]);
+  return { rows, total: total?.total ?? 0 };
 }
 
 /** Inspections assigned to an inspector that are not finished. */

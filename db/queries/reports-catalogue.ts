@@ -1,9 +1,9 @@
 import 'server-only';
-import { and, count, desc, eq, isNull, like, or, sql } from 'drizzle-orm';
+import { and, count, desc, eq, isNull, sql } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { inspectionFees, machines, reportAccessGrants, reports } from '@/db/schema';
-import type { CatalogueFilters } from '@/lib/validation/list-filters';
-import { containsPattern } from './like-pattern';
+import type { MachineSearch } from '@/lib/validation/list-filters';
+import { makerOrModelContains } from './like-pattern';
 
 /** Machines per page of the catalogue: a dozen rows of two cards. */
 export const CATALOGUE_PAGE_SIZE = 24;
@@ -45,14 +45,9 @@ function accessibleInspections(userId: string) {
  * One page of the current released version of every inspected machine, newest first, with the fee to
  * buy it, and how many there are in all; `q` looks for a maker or model.
  */
-export async function listCatalogueReports(userId: string, filters: CatalogueFilters) {
+export async function listCatalogueReports(userId: string, filters: MachineSearch) {
   const accessible = accessibleInspections(userId);
-  const pattern = filters.q ? containsPattern(filters.q) : null;
-  const where = and(
-    eq(reports.status, 'released'),
-    isNull(reports.supersededById),
-    pattern ? or(like(machines.maker, pattern), like(machines.model, pattern), like(sql`concat(${machines.maker}, ' ', ${machines.model})`, pattern)) : undefined,
-  );
+  const where = and(eq(reports.status, 'released'), isNull(reports.supersededById), filters.q ? makerOrModelContains(filters.q) : undefined);
   const [rows, [total]] = await Promise.all([
     db
       .select({ ...catalogueColumns, hasAccess: sql<number>`${accessible.inspectionId} is not null` })

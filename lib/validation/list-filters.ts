@@ -42,6 +42,6 @@ export const auditFiltersSchema = z.object({
 });
 export type AuditFilters = z.output<typeof auditFiltersSchema>;
 
-/** The reports catalogue: a maker or model to look for, and the page. */
-export const catalogueFiltersSchema = z.object({ q: optionalText(100), page });
-export type CatalogueFilters = z.output<typeof catalogueFiltersSchema>;
+/** A list of machines (the reports catalogue, a seller's machines): a maker or model to look for, and the page. */
+export const machineSearchSchema = z.object({ q: optionalText(100), page });
+export type MachineSearch = z.output<typeof machineSearchSchema>;

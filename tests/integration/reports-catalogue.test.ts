@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDatabase, db } from '@/db/client';
 import { reportAccessGrants } from '@/db/schema';
 import { CATALOGUE_PAGE_SIZE, listCatalogueReports } from '@/db/queries/reports-catalogue';
-import { catalogueFiltersSchema } from '@/lib/validation/list-filters';
+import { machineSearchSchema } from '@/lib/validation/list-filters';
 import { createAccount, type TestAccount } from '../support/accounts';
 import { createReleasedReport } from '../support/purchase-fixtures';
 
@@ -25,7 +25,7 @@ describe('the reports catalogue', () => {
   }, 120_000);
   afterAll(() => closeDatabase());
 
-  const list = (query: Record<string, string>) => listCatalogueReports(buyer.id, catalogueFiltersSchema.parse(query));
+  const list = (query: Record<string, string>) => listCatalogueReports(buyer.id, machineSearchSchema.parse(query));
 
   it('gives one page at a time, newest report first, and the number in all', async () => {
     const first = await list({ q: maker });
@@ -56,9 +56,9 @@ describe('the reports catalogue', () => {
   });
 
   it('reads an address it cannot use as the first page, whole catalogue', () => {
-    expect(catalogueFiltersSchema.parse({ page: 'abc', q: '   ' })).toEqual({ page: 1, q: undefined });
-    expect(catalogueFiltersSchema.parse({ page: '0' }).page).toBe(1);
-    expect(catalogueFiltersSchema.parse({ page: ['2', '3'] }).page).toBe(1);
-    expect(catalogueFiltersSchema.parse({ q: 'x'.repeat(101) }).q).toBeUndefined();
+    expect(machineSearchSchema.parse({ page: 'abc', q: '   ' })).toEqual({ page: 1, q: undefined });
+    expect(machineSearchSchema.parse({ page: '0' }).page).toBe(1);
+    expect(machineSearchSchema.parse({ page: ['2', '3'] }).page).toBe(1);
+    expect(machineSearchSchema.parse({ q: 'x'.repeat(101) }).q).toBeUndefined();
   });
 });

@@ -1,11 +1,15 @@
+import Link from 'next/link';
 import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { listSellerMachines } from '@/db/queries/dashboard';
 import { formatDate, formatMm } from '@/lib/format';
 import { INSPECTION_STATUS_LABELS } from '@/lib/inspection-status';
 
+/** How many of a seller's machines the overview shows; the rest are a link away. */
+const OVERVIEW_MACHINES = 8;
+
 export async function SellerOverview({ userId }: { userId: string }) {
-  const machines = await listSellerMachines(userId);
+  const { rows: machines, total } = await listSellerMachines(userId, { page: 1, q: undefined }, OVERVIEW_MACHINES);
   return (
     <Card title="Your machines">
       {machines.length === 0 ? (
@@ -31,6 +35,11 @@ export async function SellerOverview({ userId }: { userId: string }) {
           ))}
         </ul>
       )}
+      {total > machines.length ? (
+        <Link href="/machines" className="mt-3 inline-flex min-h-touch items-center font-medium text-copper hover:underline">
+          All {total.toLocaleString('en-GB')} machines →
+        </Link>
+      ) : null}
     </Card>
   );
 }

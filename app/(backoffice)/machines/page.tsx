@@ -5,17 +5,25 @@ import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { StatusPill } from '@/components/ui/status-pill';
-import { listSellerMachines } from '@/db/queries/dashboard';
+import { Pager } from '@/components/data-table/pager';
+import { MachineSearchForm } from '@/components/forms/machine-search-form';
+import { listSellerMachines, SELLER_MACHINES_PAGE_SIZE } from '@/db/queries/dashboard';
 import { requirePageSession } from '@/lib/auth/session';
 import { formatMm } from '@/lib/format';
+import { machineCountText, machineSearchHref, pageCountText } from '@/lib/machine-search';
 import { can } from '@/lib/roles';
+import { machineSearchSchema } from '@/lib/validation/list-filters';
 
 export const metadata: Metadata = { title: 'Your machines' };
 
-export default async function MachinesPage() {
+export default async function MachinesPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageSession();
   if (!can(user.role, 'machine.list.own')) notFound();
-  const machines = await listSellerMachines(user.id);
+  const filters = machineSearchSchema.parse(await searchParams);
+  const { rows: machines, total } = await listSellerMachines(user.id, filters);
+  const first = (filters.page - 1) * SELLER_MACHINES_PAGE_SIZE + 1;
+  // The search is there once a seller has more than a page of machines, or is searching.
+  const searchable = total > SELLER_MACHINES_PAGE_SIZE || Boolean(filters.q) || filters.page > 1;
   return (
     <>
       <div className="flex flex-wrap items-end justify-between gap-4">
@@ -25,9 +33,17 @@ export default async function MachinesPage() {
         </div>
         <ButtonLink href="/machines/new">Add a machine</ButtonLink>
       </div>
-      <Card className="mt-6">
+      {searchable ? <MachineSearchForm action="/machines" q={filters.q} /> : null}
+      {machines.length > 0 && searchable ? <p className="figures mt-6 text-sm text-ink-soft">{machineCountText(first, machines.length, total, SELLER_MACHINES_PAGE_SIZE)}, last changed first</p> : null}
+      <Card className={searchable ? 'mt-3' : 'mt-6'}>
         {machines.length === 0 ? (
-          <EmptyState title="No machines yet" text="Add your first lathe: maker, model, size and where it stands." />
+          filters.q ? (
+            <EmptyState title={`None of your machines matches “${filters.q}”`} text="Try part of the maker’s name or of the model." />
+          ) : total > 0 ? (
+            <EmptyState title="This page is past your last machine" text={`You have ${total.toLocaleString('en-GB')} machines; go back to the first page.`} />
+          ) : (
+            <EmptyState title="No machines yet" text="Add your first lathe: maker, model, size and where it stands." />
+          )
         ) : (
           <ul className="divide-y divide-line">
             {machines.map((m) => (
@@ -50,6 +66,12 @@ export default async function MachinesPage() {
           </ul>
         )}
       </Card>
+      <Pager
+        page={filters.page}
+        hasMore={filters.page * SELLER_MACHINES_PAGE_SIZE < total}
+        href={(page) => machineSearchHref('/machines', filters.q, page)}
+        summary={total > SELLER_MACHINES_PAGE_SIZE ? pageCountText(filters.page, total, SELLER_MACHINES_PAGE_SIZE) : undefined}
+      />
     </>
   );
 }

@@ -8,25 +8,16 @@ import { CATALOGUE_PAGE_SIZE, listCatalogueReports } from '@/db/queries/reports-
 import { requirePageSession } from '@/lib/auth/session';
 import { formatDate, formatMm, formatMoney } from '@/lib/format';
 import { can } from '@/lib/roles';
-import { catalogueFiltersSchema, type CatalogueFilters } from '@/lib/validation/list-filters';
+import { machineSearchSchema } from '@/lib/validation/list-filters';
+import { machineCountText, machineSearchHref, pageCountText } from '@/lib/machine-search';
+import { MachineSearchForm } from '@/components/forms/machine-search-form';
 
 export const metadata: Metadata = { title: 'Inspected machines' };
-
-const COUNT = new Intl.NumberFormat('en-GB');
-
-/** The catalogue's address for a search and page; the defaults are left out. */
-function catalogueHref(filters: CatalogueFilters, page: number) {
-  const params = new URLSearchParams();
-  if (filters.q) params.set('q', filters.q);
-  if (page > 1) params.set('page', String(page));
-  const query = params.toString();
-  return query ? `/reports?${query}` : '/reports';
-}
 
 export default async function ReportsCataloguePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageSession();
   if (!can(user.role, 'report.browse')) notFound();
-  const filters = catalogueFiltersSchema.parse(await searchParams);
+  const filters = machineSearchSchema.parse(await searchParams);
   const { rows: reports, total } = await listCatalogueReports(user.id, filters);
   const first = (filters.page - 1) * CATALOGUE_PAGE_SIZE + 1;
   return (
@@ -37,34 +28,15 @@ export default async function ReportsCataloguePage({ searchParams }: { searchPar
         Every machine here has a released Waygrade report. The overall condition is open to all; the measured checks, photos, repair
         estimate and valuation come with the report.
       </p>
-      <form method="get" action="/reports" role="search" className="mt-6 flex max-w-xl flex-wrap items-end gap-3">
-        <label className="block min-w-0 flex-1">
-          <span className="font-medium">Maker or model</span>
-          <input
-            name="q"
-            type="search"
-            defaultValue={filters.q ?? ''}
-            placeholder="e.g. Corvane CL-330"
-            className="mt-1 block min-h-touch w-full rounded-lg border border-line-strong bg-paper-raised px-3 text-base"
-          />
-        </label>
-        <button type="submit" className="min-h-touch rounded-lg border border-line-strong bg-paper-sunken px-5 font-medium hover:bg-line">
-          Search
-        </button>
-        {filters.q ? (
-          <Link href="/reports" className="flex min-h-touch items-center px-2 font-medium text-ink-soft hover:text-ink">
-            Show all
-          </Link>
-        ) : null}
-      </form>
+      <MachineSearchForm action="/reports" q={filters.q} />
       {reports.length === 0 ? (
         <div className="mt-8">
           {filters.q ? (
             <EmptyState title={`No machine matches “${filters.q}”`} text="Try part of the maker’s name or of the model." />
           ) : total > 0 ? (
             <>
-              <EmptyState title="This page is past the last machine" text={`There are ${COUNT.format(total)} machines in all.`} />
-              <Link href={catalogueHref(filters, 1)} className="mt-4 inline-flex min-h-touch items-center font-medium text-copper hover:underline">
+              <EmptyState title="This page is past the last machine" text={`There are ${total.toLocaleString('en-GB')} machines in all.`} />
+              <Link href={machineSearchHref('/reports', filters.q, 1)} className="mt-4 inline-flex min-h-touch items-center font-medium text-copper hover:underline">
                 ← First page
               </Link>
             </>
@@ -75,9 +47,8 @@ export default async function ReportsCataloguePage({ searchParams }: { searchPar
       ) : (
         <>
           <p className="figures mt-6 text-sm text-ink-soft">
-            {total <= CATALOGUE_PAGE_SIZE
-              ? `${COUNT.format(total)} ${total === 1 ? 'machine' : 'machines'}`
-              : `${COUNT.format(first)}–${COUNT.format(first + reports.length - 1)} of ${COUNT.format(total)} machines, newest report first`}
+            {machineCountText(first, reports.length, total, CATALOGUE_PAGE_SIZE)}
+            {total > CATALOGUE_PAGE_SIZE ? ', newest report first' : ''}
           </p>
           <ul className="mt-3 grid gap-4 md:grid-cols-2">
             {reports.map((r) => (
@@ -123,8 +94,8 @@ export default async function ReportsCataloguePage({ searchParams }: { searchPar
           <Pager
             page={filters.page}
             hasMore={filters.page * CATALOGUE_PAGE_SIZE < total}
-            href={(page) => catalogueHref(filters, page)}
-            summary={`Page ${COUNT.format(filters.page)} of ${COUNT.format(Math.ceil(total / CATALOGUE_PAGE_SIZE))}`}
+            href={(page) => machineSearchHref('/reports', filters.q, page)}
+            summary={pageCountText(filters.page, total, CATALOGUE_PAGE_SIZE)}
           />
         </>
       )}
