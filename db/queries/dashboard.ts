@@ -19,16 +19,16 @@ export async function listSellerMachines(sellerId: string, filters: MachineSearc
   const [rows, [total]] = await Promise.all([
     db
       .select({
-      id: machines.id,
-      maker: machines.maker,
-      model: machines.model,
-      swingMm: machines.swingMm,
-      betweenCentresMm: machines.betweenCentresMm,
-      yearBuilt: machines.yearBuilt,
-      listingStatus: machines.listingStatus,
-      inspectionStatus: inspections.status,
-      scheduledAt: inspections.scheduledAt,
-    })
+        id: machines.id,
+        maker: machines.maker,
+        model: machines.model,
+        swingMm: machines.swingMm,
+        betweenCentresMm: machines.betweenCentresMm,
+        yearBuilt: machines.yearBuilt,
+        listingStatus: machines.listingStatus,
+        inspectionStatus: inspections.status,
+        scheduledAt: inspections.scheduledAt,
+      })
       .from(machines)
       .leftJoin(inspections, eq(inspections.id, latestInspection))
       .where(where)
