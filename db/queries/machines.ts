@@ -1,12 +1,25 @@
 import 'server-only';
-import { and, asc, desc, eq } from 'drizzle-orm';
+import { and, asc, count, desc, eq } from 'drizzle-orm';
 import { db } from '@/db/client';
-import { inspections, inspectionStatusEvents, machines, reports, users } from '@/db/schema';
+import { inspections, inspectionStatusEvents, machineDisclosures, machineInclusions, machineMovingSheets, machines, reports, users } from '@/db/schema';
 
 /** One machine as its seller (or a coordinator) sees it. */
 export async function getMachine(machineId: number) {
   const [row] = await db.select().from(machines).where(eq(machines.id, machineId));
   return row ?? null;
+}
+
+/**
+ * What the seller has told beyond the listing: when the disclosure was last answered, the moving
+ * sheet's weight and access, and how many things are listed as coming with the machine.
+ */
+export async function findListingExtras(machineId: number) {
+  const [[disclosure], [moving], [inclusions]] = await Promise.all([
+    db.select({ answeredAt: machineDisclosures.updatedAt }).from(machineDisclosures).where(eq(machineDisclosures.machineId, machineId)),
+    db.select({ weightKg: machineMovingSheets.weightKg, siteAccess: machineMovingSheets.siteAccess }).from(machineMovingSheets).where(eq(machineMovingSheets.machineId, machineId)),
+    db.select({ items: count() }).from(machineInclusions).where(eq(machineInclusions.machineId, machineId)),
+  ]);
+  return { disclosureAnsweredAt: disclosure?.answeredAt ?? null, movingSheet: moving ?? null, inclusions: inclusions?.items ?? 0 };
 }
 
 /** Every inspection of a machine, newest first, each with its status history. */

@@ -2,7 +2,8 @@ import type { Metadata } from 'next';
 import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { StatusPill } from '@/components/ui/status-pill';
-import { listMachineInspections } from '@/db/queries/machines';
+import { findListingExtras, listMachineInspections } from '@/db/queries/machines';
+import { SITE_ACCESS_LABELS } from '@/lib/decision/rigging-estimate';
 import { formatDate, formatDateTime, formatMm, formatMoney } from '@/lib/format';
 import { INSPECTION_STATUS_LABELS } from '@/lib/inspection-status';
 import { SIZE_CLASS_LABELS } from '@/lib/machine-size';
@@ -19,7 +20,7 @@ const LISTING_WORDS: Record<string, string> = { draft: 'Draft listing', listed: 
 export default async function MachinePage({ params }: { params: Promise<{ machineId: string }> }) {
   const { machineId } = await params;
   const { user, machine } = await loadOwnMachine(machineId);
-  const history = await listMachineInspections(machine.id);
+  const [history, extras] = await Promise.all([listMachineInspections(machine.id), findListingExtras(machine.id)]);
   const current = history[0];
   const open = current && OPEN.has(current.status);
 
@@ -102,22 +103,43 @@ export default async function MachinePage({ params }: { params: Promise<{ machin
             </>
           )}
         </Card>
-        <Card title="Details">
-          <dl className="figures grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5">
-            {facts.map(([label, value]) => (
-              <div key={label} className="contents">
-                <dt className="text-ink-soft">{label}</dt>
-                <dd>{value}</dd>
-              </div>
-            ))}
-          </dl>
-          {machine.accessories ? (
-            <>
-              <h3 className="mt-4 font-semibold">Accessories</h3>
-              <p className="text-ink-soft">{machine.accessories}</p>
-            </>
-          ) : null}
-        </Card>
+        <div className="space-y-6">
+          <Card title="Details">
+            <dl className="figures grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5">
+              {facts.map(([label, value]) => (
+                <div key={label} className="contents">
+                  <dt className="text-ink-soft">{label}</dt>
+                  <dd>{value}</dd>
+                </div>
+              ))}
+            </dl>
+            {machine.accessories ? (
+              <>
+                <h3 className="mt-4 font-semibold">Accessories</h3>
+                <p className="text-ink-soft">{machine.accessories}</p>
+              </>
+            ) : null}
+          </Card>
+          <Card title="For buyers">
+            <dl className="figures grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5">
+              <dt className="text-ink-soft">Disclosure</dt>
+              <dd>{extras.disclosureAnsweredAt ? `answered ${formatDate(extras.disclosureAnsweredAt)}` : 'not answered yet'}</dd>
+              <dt className="text-ink-soft">Moving sheet</dt>
+              <dd>
+                {extras.movingSheet
+                  ? `${extras.movingSheet.weightKg.toLocaleString('en-GB')} kg, ${SITE_ACCESS_LABELS[extras.movingSheet.siteAccess].toLowerCase()}`
+                  : 'not filled in'}
+              </dd>
+              <dt className="text-ink-soft">What comes with it</dt>
+              <dd>{extras.inclusions === 0 ? 'nothing listed' : `${extras.inclusions} ${extras.inclusions === 1 ? 'item' : 'items'}`}</dd>
+            </dl>
+            <p className="mt-3 text-sm text-ink-soft">
+              {history.some((inspection) => inspection.reports.length > 0)
+                ? 'The released report keeps these as they stood at its release; a change shows in the next version.'
+                : 'A released report keeps these as they stand at release, so fill them in before the report goes out.'}
+            </p>
+          </Card>
+        </div>
       </div>
     </>
   );
