@@ -135,8 +135,8 @@ export default async function MachinePage({ params }: { params: Promise<{ machin
             </dl>
             <p className="mt-3 text-sm text-ink-soft">
               {history.some((inspection) => inspection.reports.length > 0)
-                ? 'The released report keeps these as they stood at its release; a change shows in the next version.'
-                : 'A released report keeps these as they stand at release, so fill them in before the report goes out.'}
+                ? 'The report keeps these as they stood when it was released; a change shows in its next version.'
+                : 'The report keeps these as they stand when it is released, so fill them in before then.'}
             </p>
           </Card>
         </div>
