@@ -4,6 +4,9 @@ export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return;
   const { startOutboxWorker } = await import('@/lib/mail/worker');
   startOutboxWorker();
+  // Each released report's PDF is rendered once, here, and stored with its SHA-256.
+  const { startReportPdfWorker } = await import('@/lib/pdf/pdf-worker');
+  startReportPdfWorker();
   // Refunds owed for re-inspections cancelled by a sale are tried again until the provider accepts them.
   const { startReinspectionRefundWorker } = await import('@/lib/reinspection/refund-worker');
   startReinspectionRefundWorker();

@@ -19,6 +19,8 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default('Waygrade <reports@waygrade.example>'),
   // How often each app server drains the e-mail outbox; 0 turns the worker off on this server.
   MAIL_WORKER_INTERVAL_MS: z.coerce.number().int().min(0).max(600_000).default(3_000),
+  // How often each app server renders and stores the PDFs of newly released reports; 0 turns it off here.
+  REPORT_PDF_WORKER_INTERVAL_MS: z.coerce.number().int().min(0).max(600_000).default(3_000),
   UPLOADTHING_TOKEN: z.string().optional(),
   UPLOADS_PUBLIC_URL: optionalUrl,
 });

@@ -4,6 +4,7 @@ import { alias } from 'drizzle-orm/mysql-core';
 import { db } from '@/db/client';
 import { machines, orders, reportAccessGrants, reports, users, ORDER_STATUSES } from '@/db/schema';
 import type { Database } from '@/db/client';
+import { sealedMachineOf } from './sealed-machine';
 
 type Reader = Pick<Database, 'select'>;
 
@@ -23,9 +24,9 @@ export async function listBuyerOrders(buyerId: string) {
       providerCheckoutSessionId: orders.providerCheckoutSessionId,
       reportId: reports.id,
       version: reports.version,
-      maker: machines.maker,
-      model: machines.model,
-      serialNumber: machines.serialNumber,
+      maker: sealedMachineOf().maker,
+      model: sealedMachineOf().model,
+      serialNumber: sealedMachineOf().serialNumber,
     })
     .from(orders)
     .innerJoin(reports, eq(reports.id, orders.reportId))
@@ -57,10 +58,10 @@ export async function listDownloadableReports(userId: string) {
       overallCondition: newest.overallCondition,
       releasedAt: newest.releasedAt,
       supersededById: newest.supersededById,
-      maker: machines.maker,
-      model: machines.model,
-      serialNumber: machines.serialNumber,
-      town: machines.town,
+      maker: sealedMachineOf(newest).maker,
+      model: sealedMachineOf(newest).model,
+      serialNumber: sealedMachineOf(newest).serialNumber,
+      town: sealedMachineOf(newest).town,
     })
     .from(newest)
     .innerJoin(machines, eq(machines.id, newest.machineId))
@@ -87,8 +88,8 @@ export async function listOrdersForAdmin(filter: { status?: OrderStatus; limit?:
       reportId: reports.id,
       version: reports.version,
       reportStatus: reports.status,
-      maker: machines.maker,
-      model: machines.model,
+      maker: sealedMachineOf().maker,
+      model: sealedMachineOf().model,
       buyerName: users.name,
       buyerEmail: users.email,
     })
@@ -116,7 +117,7 @@ export async function lockOrderWithContext(tx: Reader, orderId: number) {
       order: orders,
       buyer: { id: users.id, name: users.name, email: users.email },
       report: { id: reports.id, status: reports.status, version: reports.version, verificationCode: reports.verificationCode, inspectionId: reports.inspectionId },
-      machine: { maker: machines.maker, model: machines.model, serialNumber: machines.serialNumber },
+      machine: { maker: sealedMachineOf().maker, model: sealedMachineOf().model, serialNumber: sealedMachineOf().serialNumber },
     })
     .from(orders)
     .innerJoin(users, eq(users.id, orders.buyerId))

@@ -1,10 +1,11 @@
 import 'server-only';
 import { and, eq, isNull, ne } from 'drizzle-orm';
-import { reportAccessGrants, reports, reportSubsystemScores } from '@/db/schema';
+import { reportAccessGrants, reportPdfJobs, reports, reportSubsystemScores } from '@/db/schema';
 import type { Database } from '@/db/client';
 import type { ScoringResult } from '@/lib/scoring';
 import { newVerificationCode } from '@/lib/verification-code';
 import { collectReleaseFacts } from './release-facts';
+import { collectMachineSnapshot } from './machine-snapshot';
 import { shownScore } from '@/lib/scoring/grading/condition-scale';
 
 type Writer = Pick<Database, 'insert' | 'select' | 'update'>;
@@ -65,7 +66,10 @@ async function replaceSubsystemScores(tx: Pick<Database, 'insert' | 'delete'>, r
   );
 }
 
-/** Releases a draft: earlier released versions are marked superseded, the seller gets free access. */
+/**
+ * Releases a draft: what it states about the machine is sealed with it, earlier released versions are
+ * marked superseded, the seller gets free access, and its PDF is queued to be rendered once and stored.
+ */
 export async function releaseDraftReport(tx: Writer, input: { reportId: number; reviewerId: string; sellerId: string; at?: Date }) {
   const at = input.at ?? new Date();
   const [draft] = await tx.select().from(reports).where(and(eq(reports.id, input.reportId), eq(reports.status, 'draft')));
@@ -73,11 +77,14 @@ export async function releaseDraftReport(tx: Writer, input: { reportId: number; 
   // The facts set beside the findings are copied with the release: the trigger keeps them as they are.
   const result = (typeof draft.result === 'string' ? JSON.parse(draft.result) : draft.result) as ScoringResult;
   const releaseFacts = await collectReleaseFacts(tx, { machineId: draft.machineId, inspectionId: draft.inspectionId, motorPowerKw: result.machine.motorPowerKw });
-  await tx.update(reports).set({ status: 'released', releasedAt: at, reviewerId: input.reviewerId, releaseFacts }).where(eq(reports.id, draft.id));
+  const machineSnapshot = await collectMachineSnapshot(tx, draft.machineId);
+  if (!machineSnapshot) return null;
+  await tx.update(reports).set({ status: 'released', releasedAt: at, reviewerId: input.reviewerId, releaseFacts, machineSnapshot }).where(eq(reports.id, draft.id));
   await tx
     .update(reports)
     .set({ supersededById: draft.id })
     .where(and(eq(reports.inspectionId, draft.inspectionId), eq(reports.status, 'released'), ne(reports.id, draft.id), isNull(reports.supersededById)));
   await tx.insert(reportAccessGrants).values({ reportId: draft.id, userId: input.sellerId, reason: 'owner', grantedAt: at });
-  return draft;
+  await tx.insert(reportPdfJobs).values({ reportId: draft.id, nextAttemptAt: at });
+  return { ...draft, machineSnapshot };
 }

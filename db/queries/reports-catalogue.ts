@@ -4,9 +4,12 @@ import { db } from '@/db/client';
 import { inspectionFees, machines, reportAccessGrants, reports } from '@/db/schema';
 import type { MachineSearch } from '@/lib/validation/list-filters';
 import { makerOrModelContains } from './like-pattern';
+import { sealedMachineOf } from './sealed-machine';
 
 /** Machines per page of the catalogue: a dozen rows of two cards. */
 export const CATALOGUE_PAGE_SIZE = 24;
+
+const sealed = sealedMachineOf();
 
 /** What anyone browsing may see of a report: the machine and its overall condition, nothing bought. */
 const catalogueColumns = {
@@ -15,15 +18,16 @@ const catalogueColumns = {
   overallCondition: reports.overallCondition,
   releasedAt: reports.releasedAt,
   machineId: machines.id,
-  maker: machines.maker,
-  model: machines.model,
-  latheKind: machines.latheKind,
-  yearBuilt: machines.yearBuilt,
-  swingMm: machines.swingMm,
-  betweenCentresMm: machines.betweenCentresMm,
+  // What the released version states, not what the listing says today.
+  maker: sealed.maker,
+  model: sealed.model,
+  latheKind: sealed.latheKind,
+  yearBuilt: sealed.yearBuilt,
+  swingMm: sealed.swingMm,
+  betweenCentresMm: sealed.betweenCentresMm,
   sizeClass: machines.sizeClass,
-  town: machines.town,
-  region: machines.region,
+  town: sealed.town,
+  region: sealed.region,
   askingPriceMinor: machines.askingPriceMinor,
   machineCurrency: machines.currency,
   sellerId: machines.sellerId,

@@ -1,7 +1,8 @@
 import 'server-only';
 import { and, desc, eq, ne } from 'drizzle-orm';
 import { db } from '@/db/client';
-import { machines, reports } from '@/db/schema';
+import { machines, reportPdfs, reports } from '@/db/schema';
+import { sealedMachineOf } from './sealed-machine';
 
 /** What the public may learn from a verification code: genuineness and version, nothing paid for. */
 export async function findReportByVerificationCode(code: string) {
@@ -15,12 +16,16 @@ export async function findReportByVerificationCode(code: string) {
       withdrawnAt: reports.withdrawnAt,
       // Open to everyone in the catalogue too; the checks, photos and values are not.
       overallCondition: reports.overallCondition,
-      maker: machines.maker,
-      model: machines.model,
-      serialNumber: machines.serialNumber,
+      // As sealed with the version: the listing may have been edited since.
+      maker: sealedMachineOf().maker,
+      model: sealedMachineOf().model,
+      serialNumber: sealedMachineOf().serialNumber,
+      // The stored file's digest; null until the file is rendered.
+      pdfSha256: reportPdfs.sha256,
     })
     .from(reports)
     .innerJoin(machines, eq(machines.id, reports.machineId))
+    .leftJoin(reportPdfs, eq(reportPdfs.reportId, reports.id))
     .where(and(eq(reports.verificationCode, code), ne(reports.status, 'draft')))
     .limit(1);
   if (!row) return null;

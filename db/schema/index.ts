@@ -17,3 +17,4 @@ export * from './machine-price-changes';
 export * from './buyer-shop-profiles';
 export * from './report-settings';
 export * from './reinspection-requests';
+export * from './report-pdfs';

@@ -1,4 +1,5 @@
 import {
+  check,
   decimal,
   index,
   int,
@@ -10,6 +11,7 @@ import {
   uniqueIndex,
   varchar,
 } from 'drizzle-orm/mysql-core';
+import { sql } from 'drizzle-orm';
 import { createdAt, currency, minorUnits, timestamp, userId } from './columns';
 import { inspections } from './inspections';
 import { machines } from './machines';
@@ -58,6 +60,12 @@ export const reports = mysqlTable(
      * drafts and on versions released before the copy was kept.
      */
     releaseFacts: json('release_facts'),
+    /**
+     * Everything the report states about the machine (identity, sizes, supply, location, listing
+     * facts), copied at release (MachineSnapshot in lib/reports/machine-snapshot.ts): every reader of
+     * a released version reads this, never the live listing. Required once a version leaves draft.
+     */
+    machineSnapshot: json('machine_snapshot'),
     createdAt: createdAt(),
   },
   (t) => [
@@ -66,6 +74,7 @@ export const reports = mysqlTable(
     index('reports_machine_idx').on(t.machineId, t.status),
     index('reports_released_idx').on(t.status, t.releasedAt),
     index('reports_condition_idx').on(t.status, t.overallScore),
+    check('reports_released_sealed', sql.raw("status = 'draft' or machine_snapshot is not null")),
   ],
 );
 

@@ -1,5 +1,6 @@
 // A large data set for benchmarks: 10,000 lathes with surveys and scored reports, added to the
 // database in DATABASE_URL. Usage: npm run db:seed-large [-- --machines 10000]
+import { snapshotOf } from '@/lib/reports/machine-snapshot';
 import { randomUUID } from 'node:crypto';
 import { count, eq } from 'drizzle-orm';
 import { closeDatabase, db } from '@/db/client';
@@ -131,6 +132,8 @@ export async function seedLarge(total: number, log = console.log) {
       repairEstimateMinor: result.repairEstimate.total.amountMinor,
       currency: result.valuation.currency,
       verificationCode: newVerificationCode(),
+      // What the report states about the machine, sealed as a release through the app would seal it.
+      machineSnapshot: snapshotOf({ machineType: 'centre_lathe', currency: 'EUR', accessories: null, ...plans[i]!.machine }),
       inspectorId,
       releasedAt: new Date(`${plans[i]!.inspectedOn}T16:00:00Z`),
     }));

@@ -5,6 +5,7 @@ import { findInspectionFee } from '@/db/queries/fees';
 import { hasReportAccess } from '@/db/queries/report-access';
 import { defineOperation } from '@/lib/auth/operation';
 import { env } from '@/lib/env';
+import { sealedMachineOf } from '@/db/queries/sealed-machine';
 import { AppError } from '@/lib/errors';
 import { reportIdSchema } from '@/lib/validation/payments';
 import { stripeClient } from './stripe-client';
@@ -25,9 +26,10 @@ export const startCheckout = defineOperation({
         status: reports.status,
         supersededById: reports.supersededById,
         version: reports.version,
-        maker: machines.maker,
-        model: machines.model,
-        serialNumber: machines.serialNumber,
+        // As sealed with the version the buyer pays for.
+        maker: sealedMachineOf().maker,
+        model: sealedMachineOf().model,
+        serialNumber: sealedMachineOf().serialNumber,
         machineType: machines.machineType,
         sizeClass: machines.sizeClass,
       })

@@ -5,7 +5,6 @@ import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { ReleaseFacts } from '@/lib/decision/release-facts';
 import { scoreSurvey, type ScoringResult } from '@/lib/scoring';
-import { pdfCache, REPORT_PDF_LAYOUT } from './pdf-cache';
 import { renderReportPdf } from './render-report-pdf';
 import type { ReportDocumentData } from './report-document-data';
 import { reportLandedCost } from './report-landed-cost';
@@ -140,16 +139,5 @@ describe('the printed claims, landed cost and thermal states', () => {
   it('says so when a version was released before these facts were kept', () => {
     expect(oldText).toContain('released before the seller’s answers were kept');
     expect(oldText).not.toContain('Contradicted by the findings');
-  });
-});
-
-describe('pdfCache', () => {
-  it('never serves a file rendered by an earlier layout', async () => {
-    const dir = mkdtempSync(path.join(os.tmpdir(), 'waygrade-pdf-cache-'));
-    const key = { reportId: 5, version: 1, verificationCode: 'WG-AAAA-BBBB-CCCC' };
-    await pdfCache(dir, REPORT_PDF_LAYOUT - 1).put(key, Buffer.from('%PDF-old'));
-    expect(await pdfCache(dir, REPORT_PDF_LAYOUT).get(key)).toBeNull();
-    await pdfCache(dir).put(key, Buffer.from('%PDF-new'));
-    expect((await pdfCache(dir).get(key))?.toString()).toBe('%PDF-new');
   });
 });

@@ -31,7 +31,9 @@ export const releaseReport = defineOperation({
     }
     await moveInspection(tx, { inspectionId: inspection.id, from: inspection.status, to: 'released', actorId: actor!.id, note: input.comment || null, changes: { reviewerId: actor!.id } });
 
-    const machineSummary = { maker: machine!.maker, model: machine!.model, serialNumber: machine!.serialNumber };
+    // As sealed with the version, so the e-mail names the machine the report names.
+    const { maker, model, serialNumber } = released.machineSnapshot;
+    const machineSummary = { maker, model, serialNumber };
     await enqueueEmail(tx, {
       to: machine!.sellerEmail,
       template: 'report-released',

@@ -6,6 +6,7 @@ import { ConditionBadge } from '@/components/ui/condition-badge';
 import { findReportByVerificationCode } from '@/db/queries/verification';
 import { verificationCodeSchema } from '@/lib/validation/verification-code';
 import { formatDate } from '@/lib/format';
+import { ReleasedFileCheck } from './released-file-check';
 
 export const metadata: Metadata = { title: 'Report check', robots: { index: false } };
 
@@ -97,8 +98,19 @@ export default async function VerifyCodePage({ params }: { params: Promise<{ cod
           <p className="mt-4 text-sm text-ink-soft">
             The measured checks, photos, repair estimate and valuation are in the report itself; this page only says whether it is genuine and current.
           </p>
+          <div className="mt-4 border-t border-line pt-4 text-sm">
+            <p className="text-ink-soft">SHA-256 fingerprint of the released file</p>
+            {report.pdfSha256 ? (
+              <p className="figures mt-1 break-all text-ink" data-testid="released-file-sha256">
+                {report.pdfSha256}
+              </p>
+            ) : (
+              <p className="mt-1 text-ink">The file for this version is still being prepared; look again in a few minutes.</p>
+            )}
+          </div>
         </section>
       )}
+      {report && report.pdfSha256 ? <ReleasedFileCheck sha256={report.pdfSha256} /> : null}
       <div className="mt-6">
         <ButtonLink href="/verify" variant="secondary">
           Check another code

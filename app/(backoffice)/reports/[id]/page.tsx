@@ -5,6 +5,8 @@ import { ConditionBadge } from '@/components/ui/condition-badge';
 import { findCatalogueReport } from '@/db/queries/reports-catalogue';
 import { findingsOf } from '@/lib/decision/report-findings';
 import { findReportDecisionFacts } from '@/db/queries/report-decision';
+import { findSealedAndLiveMachine } from '@/db/queries/machine-snapshot';
+import { changedSinceReport, changeNoteFor, type MachineSnapshot } from '@/lib/reports/machine-snapshot';
 import { assessDisclosure } from '@/lib/decision/disclosure-contradictions';
 import { daysOnMarket, reportCurrency } from '@/lib/decision/report-currency';
 import { assessSupply } from '@/lib/decision/phase-converter';
@@ -55,7 +57,18 @@ export default async function ReportSummaryPage({
   const canDownload = report.hasAccess || user.role === 'admin';
   // The findings behind the claims are part of the paid report: shown to those who may read it.
   const showsFindings = canDownload || owner;
-  const [facts, readerSupply] = await Promise.all([findReportDecisionFacts(report.id), showsFindings ? findShopSupply(user.id) : null]);
+  const [facts, readerSupply, machine] = await Promise.all([
+    findReportDecisionFacts(report.id),
+    showsFindings ? findShopSupply(user.id) : null,
+    findSealedAndLiveMachine(report.id),
+  ]);
+  // What the report states about the machine is the copy sealed at release; where the listing now
+  // says otherwise, the sealed value stays and a note says what the listing says today.
+  const changes = machine?.sealed ? changedSinceReport(machine.sealed, machine.live) : [];
+  const noteFor = (key: keyof MachineSnapshot) => changeNoteFor(changes, key);
+  const shownInCard = new Set<keyof MachineSnapshot>(['latheKind', 'swingMm', 'betweenCentresMm', 'yearBuilt', 'askingPriceMinor']);
+  const otherChanges = changes.filter((change) => !shownInCard.has(change.key));
+  const askingPrice = machine?.sealed ? { minor: machine.sealed.askingPriceMinor, currency: machine.sealed.currency } : { minor: report.askingPriceMinor, currency: report.machineCurrency };
   const findings = facts ? findingsOf(facts.result) : null;
   // The seller's answers as kept with this version at release, not as the listing reads today.
   const kept = facts && showsFindings ? facts.releaseFacts : null;
@@ -110,15 +123,30 @@ export default async function ReportSummaryPage({
         <Card title="The machine">
           <dl className="figures grid grid-cols-[auto_1fr] gap-x-6 gap-y-2">
             <dt className="text-ink-soft">Type</dt>
-            <dd>{report.latheKind === 'toolroom' ? 'Toolroom centre lathe' : 'General-purpose centre lathe'}</dd>
+            <dd>
+              {report.latheKind === 'toolroom' ? 'Toolroom centre lathe' : 'General-purpose centre lathe'}
+              <ChangeNote note={noteFor('latheKind')} />
+            </dd>
             <dt className="text-ink-soft">Swing over bed</dt>
-            <dd>{formatMm(report.swingMm)}</dd>
+            <dd>
+              {formatMm(report.swingMm)}
+              <ChangeNote note={noteFor('swingMm')} />
+            </dd>
             <dt className="text-ink-soft">Between centres</dt>
-            <dd>{formatMm(report.betweenCentresMm)}</dd>
+            <dd>
+              {formatMm(report.betweenCentresMm)}
+              <ChangeNote note={noteFor('betweenCentresMm')} />
+            </dd>
             <dt className="text-ink-soft">Built</dt>
-            <dd>{report.yearBuilt ?? 'not known'}</dd>
-            <dt className="text-ink-soft">Asking price</dt>
-            <dd>{formatMoney(report.askingPriceMinor, report.machineCurrency)}</dd>
+            <dd>
+              {report.yearBuilt ?? 'not known'}
+              <ChangeNote note={noteFor('yearBuilt')} />
+            </dd>
+            <dt className="text-ink-soft">{machine?.sealed ? 'Asking price at release' : 'Asking price'}</dt>
+            <dd>
+              {formatMoney(askingPrice.minor, askingPrice.currency)}
+              <ChangeNote note={noteFor('askingPriceMinor')} />
+            </dd>
             {facts ? (
               <>
                 <dt className="text-ink-soft">Days listed</dt>
@@ -142,6 +170,19 @@ export default async function ReportSummaryPage({
             <dt className="text-ink-soft">Overall condition</dt>
             <dd className="font-medium">{report.overallCondition}</dd>
           </dl>
+          {otherChanges.length > 0 ? (
+            <div className="mt-4 border-t border-line pt-3 text-sm" data-testid="changed-since-report">
+              <p className="font-medium">The listing has changed since this report was released. The report states:</p>
+              <ul className="mt-1 space-y-1">
+                {otherChanges.map((change) => (
+                  <li key={change.key}>
+                    {change.label}: {change.released}
+                    <ChangeNote note={change.note} />
+                  </li>
+                ))}
+              </ul>
+            </div>
+          ) : null}
         </Card>
         <section aria-labelledby="locked-heading" className="rounded-card border border-line bg-paper-raised p-5 shadow-sm">
           <h2 id="locked-heading" className="flex items-center gap-2 text-lg font-semibold">
@@ -208,4 +249,10 @@ export default async function ReportSummaryPage({
       <ReportStatements notInspected={showsFindings ? (findings?.notInspected ?? null) : null} />
     </>
   );
+}
+
+/** The words beside a sealed fact the listing now gives differently. */
+function ChangeNote({ note }: { note: string | null }) {
+  if (!note) return null;
+  return <span className="block text-sm text-band-worn">{note}</span>;
 }

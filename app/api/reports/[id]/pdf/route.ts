@@ -10,14 +10,15 @@ export const dynamic = 'force-dynamic';
 
 /**
  * Download of one report version. Not `routeHandler` because the answer is a file, not JSON; the
- * session and the grant are still checked by the operation on every request, cached file or not.
+ * session and the grant are still checked by the operation on every request, stored file or not.
+ * A released version is served as stored at release, with its SHA-256 (RFC 9530 Repr-Digest).
  */
 export async function GET(_request: NextRequest, context: { params: Promise<{ id: string }> }) {
   const { id } = await context.params;
   const allowed = await authorizeReportDownload.execute(await currentActor(), { reportId: id }, { ip: await currentClientIp() });
   if (!allowed.ok) return NextResponse.json(allowed, { status: httpStatus(allowed.code) });
   try {
-    const { pdf, fromCache } = await reportPdf(allowed.data.reportId);
+    const { pdf, sha256, fromStore } = await reportPdf(allowed.data.reportId);
     return new NextResponse(new Uint8Array(pdf), {
       status: 200,
       headers: {
@@ -26,7 +27,9 @@ export async function GET(_request: NextRequest, context: { params: Promise<{ id
         'Content-Disposition': `attachment; filename="${allowed.data.filename}"`,
         // Private: the file is paid for; a shared cache must never hand it to someone else.
         'Cache-Control': 'private, no-store',
-        'X-Waygrade-Report-Cache': fromCache ? 'hit' : 'miss',
+        // "hit": the stored file; "miss": sealed by this request (the worker had not yet) or a draft.
+        'X-Waygrade-Report-Cache': fromStore ? 'hit' : 'miss',
+        ...(sha256 ? { 'Repr-Digest': `sha-256=:${Buffer.from(sha256, 'hex').toString('base64')}:`, 'X-Waygrade-Report-Sha256': sha256 } : {}),
       },
     });
   } catch (error) {
