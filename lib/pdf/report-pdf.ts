@@ -73,8 +73,10 @@ export const PDF_NOT_READY = "The report's file is still being prepared: a photo
  * version twice: whoever waits finds the file stored. A render missing a photo is not stored.
  */
 export async function sealReportPdf(reportId: number, render = renderReportVersion): Promise<StoredReportPdf & { rendered: boolean }> {
+  // The job row exists before the transaction locks it: an INSERT IGNORE inside it would take a shared
+  // lock first, and two callers upgrading theirs to the FOR UPDATE lock deadlock.
+  await db.insert(reportPdfJobs).ignore().values({ reportId, nextAttemptAt: new Date() });
   return db.transaction(async (tx) => {
-    await tx.insert(reportPdfJobs).ignore().values({ reportId, nextAttemptAt: new Date() });
     const [job] = await tx.select({ attempts: reportPdfJobs.attempts }).from(reportPdfJobs).where(eq(reportPdfJobs.reportId, reportId)).for('update');
     const stored = await findStoredReportPdf(tx, reportId);
     if (stored) return { ...stored, rendered: false };
@@ -92,12 +94,12 @@ export async function sealReportPdf(reportId: number, render = renderReportVersi
  * The PDF of one report version. A released or withdrawn version is served as stored at release
  * (sealed now, once, if the worker has not done it yet); a draft is rendered every time, never stored.
  */
-export async function reportPdf(reportId: number): Promise<{ pdf: Buffer; sha256: string | null; fromStore: boolean }> {
+export async function reportPdf(reportId: number, render = renderReportVersion): Promise<{ pdf: Buffer; sha256: string | null; fromStore: boolean }> {
   const stored = await findStoredReportPdf(primaryOf(db), reportId);
   if (stored) return { ...stored, fromStore: true };
   const version = await findReportVersion(reportId);
   if (!version) throw new AppError('not_found');
-  if (version.status === 'draft') return { pdf: (await renderReportVersion(reportId)).pdf, sha256: null, fromStore: false };
-  const sealed = await sealReportPdf(reportId);
+  if (version.status === 'draft') return { pdf: (await render(reportId)).pdf, sha256: null, fromStore: false };
+  const sealed = await sealReportPdf(reportId, render);
   return { pdf: sealed.pdf, sha256: sealed.sha256, fromStore: !sealed.rendered };
 }

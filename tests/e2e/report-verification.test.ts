@@ -5,6 +5,7 @@ import { closeDatabase, db } from '@/db/client';
 import { reports } from '@/db/schema';
 import { insertDraftReport, releaseDraftReport } from '@/db/queries/report-writes';
 import type { ScoringResult } from '@/lib/scoring';
+import { sealReportPdf } from '@/lib/pdf/report-pdf';
 import { openBrowser, screenshot } from '../support/browser';
 import { createReleasedReport } from '../support/purchase-fixtures';
 
@@ -56,6 +57,32 @@ describe('the public report check', () => {
     await page.getByText('Genuine, but replaced by a newer version').waitFor();
     await page.getByRole('link', { name: correctedCode }).click();
     await page.getByText('This is the current version of the report.').waitFor();
+    await page.close();
+  });
+
+  it('accepts the file released under the code and rejects a changed copy, computing its SHA-256 in the browser', async () => {
+    const [row] = await db.select({ id: reports.id }).from(reports).where(eq(reports.verificationCode, correctedCode));
+    const { pdf, sha256 } = await sealReportPdf(row!.id);
+    const page = await browser.newPage();
+    const uploads: string[] = [];
+    page.on('request', (request) => {
+      if (request.method() !== 'GET') uploads.push(`${request.method()} ${request.url()}`);
+    });
+    await page.goto(`/verify/${correctedCode}`);
+    await page.getByTestId('released-file-sha256').getByText(sha256).waitFor();
+    const input = page.getByTestId('released-file-input');
+    await input.setInputFiles({ name: 'report.pdf', mimeType: 'application/pdf', buffer: pdf });
+    await page.getByText('This file is the report released under this code.').waitFor();
+    await screenshot(page, 'verify-file-genuine');
+    // One byte changed in the middle of the file: it still opens, but it is not the released file.
+    const altered = Buffer.from(pdf);
+    const middle = Math.floor(altered.length / 2);
+    altered[middle] = altered[middle]! ^ 0x01;
+    await input.setInputFiles({ name: 'report.pdf', mimeType: 'application/pdf', buffer: altered });
+    await page.getByText('This file is not the released report.').waitFor();
+    expect(await page.getByTestId('released-file-verdict').textContent()).not.toContain('This file is the report released');
+    // Nothing was sent anywhere: the check ran in the browser.
+    expect(uploads).toEqual([]);
     await page.close();
   });
 
