@@ -2,6 +2,10 @@
 // NEXT_RUNTIME is a constant Next.js inlines at build time, not configuration, so it is read here.
 export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return;
+  // The configuration is checked before the server takes a request: a production deployment with a
+  // published local secret does not start.
+  const { env } = await import('@/lib/env');
+  env();
   const { startOutboxWorker } = await import('@/lib/mail/worker');
   startOutboxWorker();
   // Each released report's PDF is rendered once, here, and stored with its SHA-256.

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isLocalUploadthingToken, isLoopbackUrl, LOCAL_STRIPE_SECRET_KEY, LOCAL_STRIPE_WEBHOOK_SECRET } from './local-secrets';
 
 // The one place that reads process.env. Everything configurable is listed and checked here.
 const optionalUrl = z.url().optional();
@@ -23,17 +24,43 @@ const envSchema = z.object({
   REPORT_PDF_WORKER_INTERVAL_MS: z.coerce.number().int().min(0).max(600_000).default(3_000),
   UPLOADTHING_TOKEN: z.string().optional(),
   UPLOADS_PUBLIC_URL: optionalUrl,
+  // `production` refuses the published local stand-in secrets. Unset: `production` when APP_URL is not
+  // on this machine (localhost, 127.x, ::1), else `local`. NODE_ENV says how the app was built, not this.
+  WAYGRADE_DEPLOYMENT: z.enum(['local', 'production']).optional(),
 });
 
-export type Env = z.infer<typeof envSchema>;
+export type Env = Omit<z.infer<typeof envSchema>, 'WAYGRADE_DEPLOYMENT'> & { WAYGRADE_DEPLOYMENT: 'local' | 'production' };
 
-function readEnv(): Env {
-  const parsed = envSchema.safeParse(process.env);
+/**
+ * The local stand-in secrets are published, so a webhook or upload callback signed with them can be
+ * forged by anyone. They are refused in a production deployment, and anywhere beside a real payments
+ * key (a real key with the local webhook secret would let a forged webhook grant a report).
+ */
+function localSecretProblems(config: z.infer<typeof envSchema>, deployment: 'local' | 'production'): string[] {
+  const local = [
+    config.STRIPE_SECRET_KEY === LOCAL_STRIPE_SECRET_KEY && 'STRIPE_SECRET_KEY',
+    config.STRIPE_WEBHOOK_SECRET === LOCAL_STRIPE_WEBHOOK_SECRET && 'STRIPE_WEBHOOK_SECRET',
+    config.UPLOADTHING_TOKEN !== undefined && isLocalUploadthingToken(config.UPLOADTHING_TOKEN) && 'UPLOADTHING_TOKEN',
+  ].filter((name): name is string => Boolean(name));
+  if (deployment === 'production') {
+    return local.map((name) => `  ${name}: is the published local stand-in value, refused in a production deployment (WAYGRADE_DEPLOYMENT=production, or an APP_URL not on this machine); set the real one`);
+  }
+  const realPaymentsKey = config.STRIPE_SECRET_KEY !== undefined && config.STRIPE_SECRET_KEY !== LOCAL_STRIPE_SECRET_KEY;
+  if (!realPaymentsKey) return [];
+  return local.map((name) => `  ${name}: is the published local stand-in value beside a real STRIPE_SECRET_KEY; set the real one too, never mix them`);
+}
+
+/** Validates a set of environment variables (process.env by default). */
+export function readEnv(source: Record<string, string | undefined> = process.env): Env {
+  const parsed = envSchema.safeParse(source);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((issue) => `  ${issue.path.join('.')}: ${issue.message}`);
     throw new Error(`Invalid environment configuration:\n${lines.join('\n')}`);
   }
-  return parsed.data;
+  const deployment = parsed.data.WAYGRADE_DEPLOYMENT ?? (isLoopbackUrl(parsed.data.APP_URL) ? 'local' : 'production');
+  const problems = localSecretProblems(parsed.data, deployment);
+  if (problems.length > 0) throw new Error(`Invalid environment configuration:\n${problems.join('\n')}`);
+  return { ...parsed.data, WAYGRADE_DEPLOYMENT: deployment };
 }
 
 let cached: Env | undefined;

@@ -128,6 +128,20 @@ export async function lockOrderWithContext(tx: Reader, orderId: number) {
   return row ? { ...row, order: locked } : null;
 }
 
+/**
+ * Holds the buyer's account row until commit. Starting a checkout and applying a completed payment
+ * take it first (before any order lock), so one buyer's checkouts and payments take turns.
+ */
+export async function lockBuyer(tx: Reader, buyerId: string) {
+  await tx.select({ id: users.id }).from(users).where(eq(users.id, buyerId)).for('update');
+}
+
+/** The buyer of an order (never changes), read before the buyer's lock is taken. */
+export async function findOrderBuyer(tx: Reader, orderId: number) {
+  const [row] = await tx.select({ buyerId: orders.buyerId }).from(orders).where(eq(orders.id, orderId));
+  return row?.buyerId ?? null;
+}
+
 export type OrderWithContext = NonNullable<Awaited<ReturnType<typeof lockOrderWithContext>>>;
 
 /** The order a provider payment belongs to, when the payment has already been recorded on it. */

@@ -14,13 +14,16 @@ const grantedReport = alias(reports, 'granted_report');
  * Read from the primary: the buyer downloads straight after the payment's grant is written, before
  * a replica may have it.
  */
-export async function hasReportAccess(reader: Reader, userId: string, reportId: number): Promise<boolean> {
-  const [row] = await primaryOf(reader)
+export async function hasReportAccess(reader: Reader, userId: string, reportId: number, options: { locking?: boolean } = {}): Promise<boolean> {
+  const query = primaryOf(reader)
     .select({ id: reportAccessGrants.id })
     .from(reports)
     .innerJoin(grantedReport, eq(grantedReport.inspectionId, reports.inspectionId))
     .innerJoin(reportAccessGrants, eq(reportAccessGrants.reportId, grantedReport.id))
     .where(and(eq(reports.id, reportId), eq(reportAccessGrants.userId, userId), isNull(reportAccessGrants.revokedAt)))
     .limit(1);
+  // `locking` reads the latest commit rather than the transaction's snapshot: a grant another
+  // transaction wrote while this one waited for a lock is seen.
+  const [row] = options.locking ? await query.for('update') : await query;
   return Boolean(row);
 }

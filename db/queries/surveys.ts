@@ -54,9 +54,12 @@ export async function isInspectionAssignedTo(reader: Reader, inspectionId: numbe
 /**
  * Read from the primary: the version handed to the phone is the base of its next autosave, and a
  * replica a moment behind would make that save look like another device's (409).
+ * `lock` reads the latest commit and holds the row until this transaction ends: an autosave and a
+ * submission of the same survey then take turns, and the second sees what the first did.
  */
-export async function findSurvey(reader: Reader, inspectionId: number) {
-  const [row] = await primaryOf(reader).select().from(surveys).where(eq(surveys.inspectionId, inspectionId));
+export async function findSurvey(reader: Reader, inspectionId: number, options: { lock?: boolean } = {}) {
+  const query = primaryOf(reader).select().from(surveys).where(eq(surveys.inspectionId, inspectionId));
+  const [row] = options.lock ? await query.for('update') : await query;
   return row ?? null;
 }
 

@@ -4,6 +4,7 @@ import { users } from '@/db/schema';
 import { defineOperation } from '@/lib/auth/operation';
 import { consumeToken, type TokenPurpose } from '@/lib/auth/one-time-tokens';
 import { hashPassword } from '@/lib/auth/password';
+import { rememberDevice } from '@/lib/auth/known-device-cookie';
 import { clearAttempts, subjectsFor } from '@/lib/auth/rate-limit';
 import { AppError } from '@/lib/errors';
 import { passwordFromLinkSchema } from '@/lib/validation/one-time-link';
@@ -34,6 +35,9 @@ function passwordFromLink(name: string, purpose: Extract<TokenPurpose, 'reset_pa
         .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1`, emailVerified: user.emailVerified ?? new Date() })
         .where(eq(users.id, userId));
       await clearAttempts(subjectsFor('sign-in', user.email, null));
+      // The browser that followed the mailed link is the owner's: it becomes a known device, so a
+      // stranger still sending wrong passwords cannot slow its next sign-in down.
+      await rememberDevice(userId);
       return { data: { email: user.email }, entityId: userId };
     },
   });

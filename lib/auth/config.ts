@@ -5,6 +5,7 @@ import { toAppError } from '@/lib/errors';
 import type { Role } from '@/lib/roles';
 import { authenticate, type SignInRefusal } from './credentials';
 import { clientIpFrom } from './client-ip';
+import { rememberDevice } from './known-device-cookie';
 import { findActiveAccount, usesSecureCookies } from './read-session';
 
 /** Carries why sign-in was refused to the sign-in action, which words it for the person. */
@@ -34,6 +35,7 @@ const config = (): NextAuthConfig => ({
       async authorize(raw, request) {
         const result = await authenticate(raw, { ip: clientIpFrom(request.headers) });
         if (!result.ok) throw new SignInRefused(result.reason);
+        await rememberDevice(result.user.id);
         return result.user;
       },
     }),

@@ -2,7 +2,8 @@ import 'server-only';
 import type Stripe from 'stripe';
 import { and, eq } from 'drizzle-orm';
 import { orders, paymentEvents, reinspectionRequests } from '@/db/schema';
-import { findOrderIdByPaymentIntent, lockOrderWithContext } from '@/db/queries/purchases';
+import { findOrderBuyer, findOrderIdByPaymentIntent, lockBuyer, lockOrderWithContext } from '@/db/queries/purchases';
+import { hasReportAccess } from '@/db/queries/report-access';
 import type { Transaction } from '@/lib/auth/operation';
 import { confirmReinspectionPayment, type ReinspectionPaymentOutcome } from '@/lib/reinspection/confirm-reinspection-payment';
 import { markOrderPaid, markOrderRefunded } from './order-transitions';
@@ -20,6 +21,7 @@ export type PaymentEventOutcome =
   | 'granted'
   | 'refunded'
   | 'refunded-report-withdrawn'
+  | 'refunded-already-bought'
   | 'expired'
   | 'unchanged'
   | 'unknown-order'
@@ -28,6 +30,7 @@ export type PaymentEventOutcome =
 
 export const WITHDRAWN_REPORT_REFUND_REASON = 'The report was withdrawn before your payment completed, so it could not be delivered.';
 export const PROVIDER_REFUND_REASON = 'Refunded by Waygrade.';
+export const ALREADY_BOUGHT_REFUND_REASON = 'You had already paid for this report, so this second payment was refunded in full. You keep your access to the report.';
 
 /** The fields of a provider event that are read here; `type` stays a string so unknown kinds pass. */
 export type PaymentEventInput = { id: string; type: string; created: number; data: { object: unknown } };
@@ -68,6 +71,10 @@ export async function applyPaymentEvent(tx: Transaction, event: PaymentEventInpu
 
 async function sessionCompleted(tx: Transaction, session: Stripe.Checkout.Session, provider: PaymentProvider, now: Date) {
   const orderId = orderIdFrom(session.client_reference_id ?? session.metadata?.orderId);
+  // The buyer first, then the order, the order starting a checkout takes them in: one buyer's two
+  // payments take turns, and the second sees the grant the first wrote.
+  const buyerId = orderId ? await findOrderBuyer(tx, orderId) : null;
+  if (buyerId) await lockBuyer(tx, buyerId);
   const ctx = orderId ? await lockOrderWithContext(tx, orderId) : null;
   if (!ctx || ctx.order.providerCheckoutSessionId !== session.id) return { outcome: 'unknown-order' as const, orderId };
   // Delayed payment methods complete the session before the money arrives; only paid counts.
@@ -90,6 +97,16 @@ async function sessionCompleted(tx: Transaction, session: Stripe.Checkout.Sessio
     await tx.update(orders).set({ paidAt: now }).where(eq(orders.id, order.id));
     await markOrderRefunded(tx, ctx, { paymentIntentId, refundId, reason: WITHDRAWN_REPORT_REFUND_REASON, at: now });
     return { outcome: 'refunded-report-withdrawn' as const, orderId };
+  }
+  // A second payment for a report the buyer already has (two pages paid, or a page paid after the
+  // other): the money goes back at once and the buyer keeps the one grant.
+  if (await hasReportAccess(tx, order.buyerId, order.reportId, { locking: true })) {
+    if (!paymentIntentId) return { outcome: 'unchanged' as const, orderId };
+    // Keyed by the provider's payment id, so a retried event cannot refund twice.
+    const { refundId } = await provider.refundPayment({ orderId: order.id, paymentIntentId, reason: ALREADY_BOUGHT_REFUND_REASON });
+    await tx.update(orders).set({ paidAt: now }).where(eq(orders.id, order.id));
+    await markOrderRefunded(tx, ctx, { paymentIntentId, refundId, reason: ALREADY_BOUGHT_REFUND_REASON, at: now });
+    return { outcome: 'refunded-already-bought' as const, orderId };
   }
   await markOrderPaid(tx, ctx, { paymentIntentId, at: now });
   return { outcome: 'granted' as const, orderId };

@@ -1,9 +1,10 @@
 import 'server-only';
-import { eq } from 'drizzle-orm';
+import { and, desc, eq, isNotNull } from 'drizzle-orm';
 import { machines, orders, reports } from '@/db/schema';
+import { lockBuyer } from '@/db/queries/purchases';
 import { findInspectionFee } from '@/db/queries/fees';
 import { hasReportAccess } from '@/db/queries/report-access';
-import { defineOperation } from '@/lib/auth/operation';
+import { defineOperation, type Transaction } from '@/lib/auth/operation';
 import { env } from '@/lib/env';
 import { sealedMachineOf } from '@/db/queries/sealed-machine';
 import { AppError } from '@/lib/errors';
@@ -13,6 +14,9 @@ import { stripeClient } from './stripe-client';
 /**
  * A buyer starts paying for a report: a pending order and a hosted checkout page for the fee of the
  * machine's size class. Nothing is granted here; access comes only from the provider's webhook.
+ * One open checkout per buyer and report: a second click, a second tab or a retry gets the page
+ * already open at the provider, so the same report cannot be paid twice through two pages. (A payment
+ * that still arrives twice is refunded by the webhook handling: see apply-payment-event.ts.)
  */
 export const startCheckout = defineOperation({
   name: 'report.checkout',
@@ -39,7 +43,12 @@ export const startCheckout = defineOperation({
       .limit(1);
     if (!report || report.status !== 'released') throw new AppError('not_found', 'This report is not for sale.');
     if (report.supersededById) throw new AppError('conflict', 'A newer version of this report has been released; buy that one instead.');
-    if (await hasReportAccess(tx, actor!.id, report.id)) throw new AppError('conflict', 'You already have this report: it is in your purchases.');
+    // The buyer's row is held until commit: two checkouts of one buyer take turns, so the second
+    // finds the first's pending order instead of opening another page.
+    await lockBuyer(tx, actor!.id);
+    if (await hasReportAccess(tx, actor!.id, report.id, { locking: true })) throw new AppError('conflict', 'You already have this report: it is in your purchases.');
+    const open = await findOpenCheckout(tx, actor!.id, report.id);
+    if (open) return { data: { orderId: open.orderId, checkoutUrl: open.url }, entityId: open.orderId, detail: { reportId: report.id, reused: true } };
     const fee = await findInspectionFee(tx, report.machineType, report.sizeClass);
     if (!fee) throw new AppError('conflict', 'No fee is set for this size of machine yet. Please try again later.');
 
@@ -79,3 +88,23 @@ export const startCheckout = defineOperation({
     return { data: { orderId, checkoutUrl: session.url }, entityId: orderId, detail: { reportId: report.id, amountMinor: fee.amountMinor } };
   },
 });
+
+/**
+ * The buyer's pending order for this report whose checkout page is still open at the provider, if any.
+ * A page the provider has expired or completed is not reused; its own webhook event settles its order.
+ */
+async function findOpenCheckout(tx: Transaction, buyerId: string, reportId: number) {
+  const pending = await tx
+    .select({ id: orders.id, sessionId: orders.providerCheckoutSessionId })
+    .from(orders)
+    .where(and(eq(orders.buyerId, buyerId), eq(orders.reportId, reportId), eq(orders.purpose, 'report'), eq(orders.status, 'pending'), isNotNull(orders.providerCheckoutSessionId)))
+    .orderBy(desc(orders.id))
+    .limit(3)
+    // A locking read sees the order another checkout committed while this one waited for the buyer.
+    .for('update');
+  for (const order of pending) {
+    const session = await stripeClient().checkout.sessions.retrieve(order.sessionId!);
+    if (session.status === 'open' && session.url) return { orderId: order.id, url: session.url };
+  }
+  return null;
+}

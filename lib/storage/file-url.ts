@@ -13,6 +13,11 @@ export function publicFileUrl(key: string): string {
   return `https://${appId}.ufs.sh/f/${encodeURIComponent(key)}`;
 }
 
+/** The one origin stored files are served from; the app fetches files from nowhere else. */
+export function uploadsOrigin(): string {
+  return new URL(publicFileUrl('file')).origin;
+}
+
 function appIdFromToken(token: string | undefined): string {
   if (!token) throw new Error('UPLOADTHING_TOKEN is not set: photos cannot be addressed.');
   const decoded = JSON.parse(Buffer.from(token, 'base64').toString('utf8')) as { appId?: string };

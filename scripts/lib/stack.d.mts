@@ -7,6 +7,7 @@ export const LOCAL_STRIPE_WEBHOOK_SECRET: string;
 export const LOCAL_UPLOADTHING_API_KEY: string;
 export const LOCAL_UPLOADTHING_APP_ID: string;
 export function localUploadthingToken(): string;
+export function checkLocalFallbacks(source?: Record<string, string | undefined>): void;
 export function ensureNodeModules(): Promise<void>;
 export function bringUp(mode: 'start' | 'test', options?: { resetDatabase?: boolean }): Promise<{ env: Record<string, string>; ports: Record<string, number>; group: unknown; stop: () => Promise<void>; appUrl: string }>;
 export function buildApp(env: Record<string, string | undefined>): Promise<void>;

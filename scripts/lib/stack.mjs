@@ -22,6 +22,7 @@ export const PROFILES = {
 };
 export const NEXT_DIST_DIR = OFFSET ? `.next-${OFFSET}` : '.next';
 
+// Published stand-in secrets: lib/env.ts refuses them outside local use (same values in lib/local-secrets.ts).
 export const LOCAL_STRIPE_SECRET_KEY = 'sk_test_waygrade_local';
 export const LOCAL_STRIPE_WEBHOOK_SECRET = 'whsec_waygrade_local';
 // uploadthing token for the local upload service: base64 JSON of apiKey, appId and regions.
@@ -33,6 +34,28 @@ export function localUploadthingToken() {
   return Buffer.from(
     JSON.stringify({ apiKey: LOCAL_UPLOADTHING_API_KEY, appId: LOCAL_UPLOADTHING_APP_ID, regions: ['local'] }),
   ).toString('base64');
+}
+
+/**
+ * Which local stand-in secrets may fill in what is unset, by the rule lib/env.ts applies: none in a
+ * production deployment (WAYGRADE_DEPLOYMENT=production, or unset with an APP_URL not on this
+ * machine), and none beside a real STRIPE_SECRET_KEY. Throws, naming what is missing, instead of
+ * starting with a mix.
+ */
+export function checkLocalFallbacks(source = process.env) {
+  const appUrl = source.APP_URL ?? 'http://localhost:3000';
+  const host = new URL(appUrl).hostname;
+  const onThisMachine = host === 'localhost' || host.endsWith('.localhost') || host === '[::1]' || /^127\.\d+\.\d+\.\d+$/.test(host);
+  const deployment = source.WAYGRADE_DEPLOYMENT ?? (onThisMachine ? 'local' : 'production');
+  const secrets = ['STRIPE_SECRET_KEY', 'STRIPE_WEBHOOK_SECRET', 'UPLOADTHING_TOKEN'];
+  const missing = secrets.filter((name) => !source[name]);
+  if (missing.length === 0) return;
+  if (deployment === 'production') {
+    throw new Error(`A production deployment (WAYGRADE_DEPLOYMENT=production, or APP_URL ${appUrl} not on this machine) gets no local stand-in secrets: set ${missing.join(', ')}.`);
+  }
+  if (source.STRIPE_SECRET_KEY && source.STRIPE_SECRET_KEY !== LOCAL_STRIPE_SECRET_KEY) {
+    throw new Error(`A real STRIPE_SECRET_KEY is set: set ${missing.join(', ')} as well; the local stand-in values are never mixed with a real key.`);
+  }
 }
 
 const node = process.execPath;
@@ -75,6 +98,7 @@ export async function bringUp(mode, { resetDatabase = false } = {}) {
   };
 
   try {
+    checkLocalFallbacks();
     let databaseUrlForApp = process.env.DATABASE_URL;
     if (!databaseUrlForApp) {
       const { paths, startedHere } = await startMariaDb(root, [PROFILES.start.database, PROFILES.test.database]);

@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it, vi } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { closeDatabase, db } from '@/db/client';
 import { reports } from '@/db/schema';
-import { applyPaymentEvent, WITHDRAWN_REPORT_REFUND_REASON, type PaymentProvider } from '@/lib/payments/apply-payment-event';
+import { ALREADY_BOUGHT_REFUND_REASON, applyPaymentEvent, WITHDRAWN_REPORT_REFUND_REASON, type PaymentProvider } from '@/lib/payments/apply-payment-event';
 import { refundOrderOperation } from '@/lib/payments/refund-order';
 import { createAccount } from '../support/accounts';
 import {
@@ -82,6 +82,32 @@ describe('payment events applied to orders', () => {
     expect(await activeGrants(orderId)).toHaveLength(0);
     const [mail] = await queuedMails(buyer.email, 'refund');
     expect(mail?.textBody).toContain('withdrawn');
+  });
+
+  it('refunds a second payment for a report the buyer already has, once, and keeps one grant', async () => {
+    const { reportId } = await createReleasedReport();
+    const buyer = await createAccount('buyer');
+    // Two checkout pages paid for one report, e.g. opened before checkouts were reused.
+    const first = await createPendingOrder(reportId, buyer.id);
+    const second = await createPendingOrder(reportId, buyer.id);
+    const { provider, refunds } = fakeProvider();
+
+    const outcomes = await Promise.all([
+      apply(providerEvent('checkout.session.completed', completedSession(first.sessionId, first.orderId, 'pi_twice_a')), provider),
+      apply(providerEvent('checkout.session.completed', completedSession(second.sessionId, second.orderId, 'pi_twice_b')), provider),
+    ]);
+    const retried = await apply(providerEvent('checkout.session.completed', completedSession(second.sessionId, second.orderId, 'pi_twice_b')), provider);
+
+    expect(outcomes.map((o) => o.outcome).sort()).toEqual(['granted', 'refunded-already-bought']);
+    expect(retried.outcome).toBe('unchanged');
+    const refunded = outcomes.find((o) => o.outcome === 'refunded-already-bought')!.orderId!;
+    const paid = refunded === first.orderId ? second.orderId : first.orderId;
+    expect(refunds).toEqual([{ orderId: refunded, paymentIntentId: refunded === first.orderId ? 'pi_twice_a' : 'pi_twice_b' }]);
+    expect(await readOrder(refunded)).toMatchObject({ status: 'refunded', refundReason: ALREADY_BOUGHT_REFUND_REASON, providerRefundId: `re_test_${refunded}` });
+    expect(await readOrder(paid)).toMatchObject({ status: 'paid' });
+    expect([...(await activeGrants(first.orderId)), ...(await activeGrants(second.orderId))]).toHaveLength(1);
+    expect(await queuedMails(buyer.email, 'payment-receipt')).toHaveLength(1);
+    expect(await queuedMails(buyer.email, 'refund')).toHaveLength(1);
   });
 
   it('marks an abandoned checkout expired', async () => {

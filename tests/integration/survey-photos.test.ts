@@ -80,7 +80,8 @@ describe('survey photo processing', () => {
     vi.stubEnv('UPLOADTHING_IS_DEV', 'false');
     vi.stubEnv('UPLOADTHING_LOG_LEVEL', 'Error');
     utapi = new UTApi();
-    store = uploadthingFileStore(utapi);
+    // This suite's own stand-in serves the files, at its own address.
+    store = uploadthingFileStore(utapi, new URL(uploads.url).origin);
   });
 
   afterAll(async () => {

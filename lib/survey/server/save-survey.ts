@@ -22,18 +22,19 @@ export const saveSurvey = defineOperation({
   authorize: isAssignedInspector,
   auditSuccess: false,
   async run({ actor, input, tx }) {
+    // The survey row is locked first, as submitting locks it: a save waiting on a submission then
+    // finds it submitted and is refused, instead of being stored after the report was scored.
+    const current = await findSurvey(tx, input.inspectionId, { lock: true });
     const inspection = await findInspectionWithMachine(tx, input.inspectionId);
     if (!inspection) throw new AppError('not_found');
+    if (current?.submittedAt) throw new AppError('conflict', 'This survey has been submitted; it can no longer be changed here.');
     if (inspection.status !== 'on_site') {
       throw new AppError('conflict', 'This survey is no longer open for changes: it has been submitted or the visit has not started.');
     }
+    if (!current) throw new AppError('not_found', 'This survey starts when you start the visit.');
+    if (current.version !== input.baseVersion) throw new AppError('conflict', SURVEY_CHANGED_ELSEWHERE);
     const version = await updateSurveyIfCurrent(tx, { inspectionId: input.inspectionId, baseVersion: input.baseVersion, data: input.data, userId: actor!.id });
-    if (version === null) {
-      const current = await findSurvey(tx, input.inspectionId);
-      if (!current) throw new AppError('not_found', 'This survey starts when you start the visit.');
-      if (current.submittedAt) throw new AppError('conflict', 'This survey has been submitted; it can no longer be changed here.');
-      throw new AppError('conflict', SURVEY_CHANGED_ELSEWHERE);
-    }
+    if (version === null) throw new AppError('conflict', SURVEY_CHANGED_ELSEWHERE);
     return { data: { version }, entityId: input.inspectionId };
   },
 });

@@ -35,7 +35,9 @@ export const submitSurvey = defineOperation({
     if (!mayTransition(actor!.role, inspection.status, 'in_review')) {
       throw new AppError('conflict', `This inspection is “${INSPECTION_STATUS_LABELS[inspection.status]}”; it cannot be submitted now.`);
     }
-    const survey = await findSurvey(tx, inspection.id);
+    // Locked: an autosave on the same version waits for this submission and is then refused, so the
+    // report is scored from exactly the version the survey keeps.
+    const survey = await findSurvey(tx, inspection.id, { lock: true });
     if (!survey) throw new AppError('not_found', 'This survey starts when you start the visit.');
     if (survey.version !== input.baseVersion) throw new AppError('conflict', SURVEY_CHANGED_ELSEWHERE);
 
