@@ -6,6 +6,7 @@ import type { Role } from '@/lib/roles';
 import { authenticate, type SignInRefusal } from './credentials';
 import { clientIpFrom } from './client-ip';
 import { findActiveAccount, usesSecureCookies } from './read-session';
+import { redirectWithinSite } from './safe-callback-path';
 
 /** Carries why sign-in was refused to the sign-in action, which words it for the person. */
 class SignInRefused extends CredentialsSignin {
@@ -39,6 +40,8 @@ const config = (): NextAuthConfig => ({
     }),
   ],
   callbacks: {
+    // Only addresses on this site are followed after signing in or out (no open redirect).
+    redirect: redirectWithinSite,
     async jwt({ token, user }) {
       if (user) {
         token.sub = user.id;
