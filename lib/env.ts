@@ -21,6 +21,9 @@ const envSchema = z.object({
   MAIL_WORKER_INTERVAL_MS: z.coerce.number().int().min(0).max(600_000).default(3_000),
   UPLOADTHING_TOKEN: z.string().optional(),
   UPLOADS_PUBLIC_URL: optionalUrl,
+  // How many proxies of our own (load balancers) stand in front of the app server. The visitor's
+  // address is the entry that many places left of the socket's in X-Forwarded-For; 0 = the socket.
+  TRUSTED_PROXY_COUNT: z.coerce.number().int().min(0).max(10).default(0),
 });
 
 export type Env = z.infer<typeof envSchema>;
