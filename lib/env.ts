@@ -27,6 +27,9 @@ const envSchema = z.object({
   // `production` refuses the published local stand-in secrets. Unset: `production` when APP_URL is not
   // on this machine (localhost, 127.x, ::1), else `local`. NODE_ENV says how the app was built, not this.
   WAYGRADE_DEPLOYMENT: z.enum(['local', 'production']).optional(),
+  // How many proxies of our own (load balancers) stand in front of the app server. The visitor's
+  // address is the entry that many places left of the socket's in X-Forwarded-For; 0 = the socket.
+  TRUSTED_PROXY_COUNT: z.coerce.number().int().min(0).max(10).default(0),
 });
 
 export type Env = Omit<z.infer<typeof envSchema>, 'WAYGRADE_DEPLOYMENT'> & { WAYGRADE_DEPLOYMENT: 'local' | 'production' };

@@ -6,6 +6,7 @@ export const ERROR_CODES = {
   not_found: { status: 404, message: 'That no longer exists, or you may not see it.' },
   invalid_input: { status: 400, message: 'Some fields need attention.' },
   conflict: { status: 409, message: 'Someone else changed this in the meantime.' },
+  too_large: { status: 413, message: 'The request is larger than this address accepts. Nothing was saved.' },
   rate_limited: { status: 429, message: 'Too many attempts. Please wait a few minutes and try again.' },
   unavailable: { status: 503, message: 'Waygrade cannot reach its database right now. Nothing was lost; please try again shortly.' },
   internal: { status: 500, message: 'Something went wrong on our side. Nothing you saved before was lost.' },

@@ -8,6 +8,19 @@ import { createServer } from 'node:http';
 import { availableParallelism } from 'node:os';
 
 const port = Number(process.env.PORT ?? 3000);
+
+/** True when the request path decodes: every % starts a two-digit escape and the bytes are UTF-8. */
+function hasDecodablePath(url = '/') {
+  const path = url.split(/[?#]/, 1)[0];
+  if (!path.includes('%')) return true;
+  try {
+    decodeURIComponent(path);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
 const hostname = process.env.HOSTNAME_BIND ?? '0.0.0.0';
 const workers = Math.max(1, Number(process.env.APP_WORKERS) || availableParallelism());
 
@@ -45,7 +58,22 @@ if (cluster.isPrimary) {
   const app = next({ dev: false, dir: process.cwd(), hostname: 'localhost', port });
   const handle = app.getRequestHandler();
   await app.prepare();
-  const server = createServer((request, response) => handle(request, response));
+  const server = createServer((request, response) => {
+    // A path whose percent-encoding is broken (`/verify/%ZZ`) makes Next.js fail while matching a
+    // dynamic route and answer a bare 500 (an App Router app has no /400 page to show). No page of ours
+    // has such an address: send it to a path that can never be a route (folders starting with "_"
+    // are private in the App Router), which Next answers with the product's 404 page and headers.
+    if (!hasDecodablePath(request.url)) request.url = '/_malformed-address';
+    // Like any proxy, add the address of the peer that connected to X-Forwarded-For. The app reads the
+    // visitor's address counting TRUSTED_PROXY_COUNT entries back from this one (lib/auth/client-ip.ts),
+    // so whatever a visitor writes in the header themselves is never taken for their address.
+    const peer = request.socket.remoteAddress;
+    if (peer) {
+      const forwarded = request.headers['x-forwarded-for'];
+      request.headers['x-forwarded-for'] = forwarded ? `${forwarded}, ${peer}` : peer;
+    }
+    return handle(request, response);
+  });
   server.listen(port, hostname);
   process.on('SIGTERM', () => {
     server.close(() => process.exit(0));

@@ -7,6 +7,7 @@ import { authenticate, type SignInRefusal } from './credentials';
 import { clientIpFrom } from './client-ip';
 import { rememberDevice } from './known-device-cookie';
 import { findActiveAccount, usesSecureCookies } from './read-session';
+import { redirectWithinSite } from './safe-callback-path';
 
 /** Carries why sign-in was refused to the sign-in action, which words it for the person. */
 class SignInRefused extends CredentialsSignin {
@@ -41,6 +42,8 @@ const config = (): NextAuthConfig => ({
     }),
   ],
   callbacks: {
+    // Only addresses on this site are followed after signing in or out (no open redirect).
+    redirect: redirectWithinSite,
     async jwt({ token, user }) {
       if (user) {
         token.sub = user.id;

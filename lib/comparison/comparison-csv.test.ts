@@ -96,4 +96,26 @@ describe('comparisonCsv', () => {
     const [line] = parse(comparisonCsv([row({ maker: '=HYPERLINK("x")' })]));
     expect(line!.Maker).toMatch(/^'=/);
   });
+
+  // Cells a spreadsheet may read as a formula start with =, +, -, @, tab or carriage return (OWASP,
+  // "CSV Injection"); a leading line feed is escaped too (common practice: nothing is lost by it).
+  it.each([
+    ['=1+2\n'],
+    ['=1+2\r\nsecond line'],
+    ['@SUM(A1)\nx'],
+    ['\n=cmd'],
+    ['\t=x'],
+    ['\r@x'],
+    ['+1'],
+    ['-2'],
+    ['-2\n3'],
+  ])('escapes the text cell %j on its first character, whatever follows', (value) => {
+    const [line] = parse(comparisonCsv([row({ maker: value, model: value, town: value, region: value })]));
+    for (const column of ['Maker', 'Model', 'Town', 'Region']) expect(line![column]).toBe(`'${value}`);
+  });
+
+  it.each([['Corvane'], ['Kellbrook'], ['CL-330'], ['A=B']])('leaves the ordinary text %j as it is', (value) => {
+    const [line] = parse(comparisonCsv([row({ maker: value })]));
+    expect(line!.Maker).toBe(value);
+  });
 });

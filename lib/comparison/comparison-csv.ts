@@ -46,6 +46,14 @@ const CSV_COLUMNS: ReadonlyArray<[header: string, value: (row: ComparisonRow) =>
   ['Details', (r) => (r.hasDetails ? 'bought' : 'summary only')],
 ];
 
+/**
+ * A text cell a spreadsheet could read as a formula: one whose first character is =, +, -, @, tab or
+ * carriage return (OWASP's CSV Injection page), or a line feed, whatever follows. papaparse's own
+ * `escapeFormulae: true` pattern (`/^[=+\-@\t\r].*$/`) needs the whole value on one line, so "=1+2"
+ * followed by a line break went out unescaped. Such a cell is written with a leading apostrophe.
+ */
+export const FORMULA_START = /^[=+\-@\t\r\n]/;
+
 export function comparisonCsv(rows: readonly ComparisonRow[]): string {
   return Papa.unparse(
     {
@@ -53,6 +61,6 @@ export function comparisonCsv(rows: readonly ComparisonRow[]): string {
       data: rows.map((row) => CSV_COLUMNS.map(([, value]) => value(row))),
     },
     // Formula escaping: a maker called "=cmd" must not run in a spreadsheet.
-    { escapeFormulae: true, newline: '\r\n' },
+    { escapeFormulae: FORMULA_START, newline: '\r\n' },
   );
 }

@@ -4,11 +4,16 @@ import { defineOperation } from '@/lib/auth/operation';
 import { applyPaymentEvent, type PaymentProvider } from './apply-payment-event';
 import { stripePaymentProvider } from './stripe-payment-provider';
 
+/** 9999-12-31T23:59:59Z, the last second MariaDB's DATETIME holds. */
+const LAST_STORABLE_SECOND = Date.UTC(9999, 11, 31, 23, 59, 59) / 1000;
+
 /** The parts of a provider event the handling reads; the rest of the object passes through. */
 const paymentEventSchema = z.looseObject({
   id: z.string().min(1).max(255),
   type: z.string().min(1).max(100),
-  created: z.number().int(),
+  // Seconds since 1970, as the provider sends them; refused past what a date column holds (9999-12-31),
+  // so an absurd value is a clear 400 and not a failed write.
+  created: z.number().int().min(0).max(LAST_STORABLE_SECOND),
   data: z.looseObject({ object: z.looseObject({}) }),
 });
 

@@ -1,4 +1,11 @@
-import { describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { eq } from 'drizzle-orm';
+import { closeDatabase, db } from '@/db/client';
+import { surveys } from '@/db/schema';
+import { createAccount } from '../support/accounts';
+import { sessionCookie } from '../support/private-stack';
+import { createReleasedReport } from '../support/purchase-fixtures';
+import { bookedInspection } from './survey-fixtures';
 
 const APP_URL = process.env.APP_URL ?? 'http://localhost:3100';
 const UPLOADS_ORIGIN = process.env.UPLOADS_PUBLIC_URL ? new URL(process.env.UPLOADS_PUBLIC_URL).origin : null;
@@ -46,5 +53,40 @@ describe('security headers on the running app', () => {
     expect(response.headers.get('referrer-policy')).toBe('strict-origin-when-cross-origin');
     expect(response.headers.get('x-frame-options')).toBe('DENY');
     expect(response.headers.get('x-powered-by')).toBeNull();
+  });
+});
+
+// Answers meant for one person must not be kept by a browser or a shared cache (RFC 9111 section 5.2.2:
+// "private" keeps shared caches out, "no-store" keeps every cache out).
+describe('cache headers on per-user answers', () => {
+  const cookies: Record<string, string> = {};
+  let inspectionId: number;
+  let reportId: number;
+  let surveyData: unknown;
+
+  beforeAll(async () => {
+    const dealer = await createAccount('dealer');
+    cookies.dealer = await sessionCookie({ ...dealer, sessionVersion: 0 });
+    const booked = await bookedInspection({ start: true });
+    inspectionId = booked.inspectionId;
+    [{ data: surveyData }] = (await db.select({ data: surveys.data }).from(surveys).where(eq(surveys.inspectionId, inspectionId))) as [{ data: unknown }];
+    cookies.inspector = await sessionCookie({ id: booked.inspector.id, role: 'inspector', name: booked.inspector.name ?? '', email: '', sessionVersion: 0 });
+    ({ reportId } = await createReleasedReport());
+  });
+  afterAll(() => closeDatabase());
+
+  it.each([
+    ['the comparison page for a dealer', () => ['/api/compare', { headers: { cookie: cookies.dealer! } }], 200],
+    ['the comparison refused to a signed-out visitor', () => ['/api/compare', {}], 401],
+    ['an inspector’s survey', () => [`/api/surveys/${inspectionId}`, { headers: { cookie: cookies.inspector! } }], 200],
+    ['an autosave refused as invalid', () => [`/api/surveys/${inspectionId}`, { method: 'PUT', headers: { cookie: cookies.inspector!, 'content-type': 'application/json' }, body: '{"baseVersion":"x"}' }], 400],
+    ['an autosave made on an old version', () => [`/api/surveys/${inspectionId}`, { method: 'PUT', headers: { cookie: cookies.inspector!, 'content-type': 'application/json' }, body: JSON.stringify({ baseVersion: 0, data: surveyData }) }], 409],
+    ['a report download refused to someone without the grant', () => [`/api/reports/${reportId}/pdf`, { headers: { cookie: cookies.dealer! } }], 404],
+    ['an export refused to a signed-out visitor', () => ['/api/compare/export', {}], 401],
+  ] as const)('marks %s private, no-store', async (_what, request, status) => {
+    const [address, init] = request() as [string, RequestInit];
+    const response = await fetch(`${APP_URL}${address}`, { redirect: 'manual', ...init });
+    expect(response.status).toBe(status);
+    expect(response.headers.get('cache-control')).toBe('private, no-store');
   });
 });

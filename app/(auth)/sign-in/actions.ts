@@ -2,6 +2,7 @@
 
 import { AuthError, CredentialsSignin } from 'next-auth';
 import { signIn } from '@/lib/auth/config';
+import { safeCallbackPath } from '@/lib/auth/safe-callback-path';
 import type { SignInRefusal } from '@/lib/auth/credentials';
 import { signInSchema } from '@/lib/validation/sign-in';
 
@@ -14,11 +15,6 @@ const REFUSALS: Record<SignInRefusal, string> = {
   unconfirmed: 'Please confirm your e-mail address first: open the link we mailed you when you signed up.',
 };
 
-/** Only same-site paths are followed after sign-in. */
-function safeCallback(url: string | undefined) {
-  return url && url.startsWith('/') && !url.startsWith('//') ? url : '/dashboard';
-}
-
 export async function signInAction(_previous: SignInState, formData: FormData): Promise<SignInState> {
   const parsed = signInSchema.safeParse(Object.fromEntries(formData));
   const email = String(formData.get('email') ?? '');
@@ -27,7 +23,8 @@ export async function signInAction(_previous: SignInState, formData: FormData): 
     await signIn('credentials', {
       email: parsed.data.email,
       password: parsed.data.password,
-      redirectTo: safeCallback(parsed.data.callbackUrl),
+      // Only same-site paths are followed after sign-in.
+      redirectTo: safeCallbackPath(parsed.data.callbackUrl),
     });
     return {};
   } catch (error) {

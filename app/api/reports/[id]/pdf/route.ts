@@ -1,4 +1,5 @@
 import { NextResponse, type NextRequest } from 'next/server';
+import { privateJson } from '@/lib/http/private-json';
 import { currentActor, currentClientIp } from '@/lib/auth/current-actor';
 import { httpStatus, toAppError } from '@/lib/errors';
 import { reportPdf } from '@/lib/pdf/report-pdf';
@@ -16,7 +17,7 @@ export const dynamic = 'force-dynamic';
 export async function GET(_request: NextRequest, context: { params: Promise<{ id: string }> }) {
   const { id } = await context.params;
   const allowed = await authorizeReportDownload.execute(await currentActor(), { reportId: id }, { ip: await currentClientIp() });
-  if (!allowed.ok) return NextResponse.json(allowed, { status: httpStatus(allowed.code) });
+  if (!allowed.ok) return privateJson(allowed, { status: httpStatus(allowed.code) });
   try {
     const { pdf, sha256, fromStore } = await reportPdf(allowed.data.reportId);
     return new NextResponse(new Uint8Array(pdf), {
@@ -35,6 +36,6 @@ export async function GET(_request: NextRequest, context: { params: Promise<{ id
   } catch (error) {
     const appError = toAppError(error);
     if (appError.code === 'internal') console.error('[report.download]', error);
-    return NextResponse.json({ ok: false, code: appError.code, message: appError.message }, { status: httpStatus(appError.code) });
+    return privateJson({ ok: false, code: appError.code, message: appError.message }, { status: httpStatus(appError.code) });
   }
 }
