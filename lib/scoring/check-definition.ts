@@ -19,6 +19,12 @@ export interface Permissible extends ValueWithUnit {
   source: SourceMark;
 }
 
+/**
+ * What a check's finding is about: condition (wear, damage, safety devices: what the grade is
+ * about), or a set-up or service item that an adjustment or an oil change puts right.
+ */
+export type CheckNature = 'condition' | 'set-up' | 'service';
+
 export interface CheckEvaluation {
   measured: ValueWithUnit & { text?: string };
   permissible: Permissible;
@@ -32,6 +38,8 @@ export interface CheckEvaluation {
   details?: Record<string, string | number | boolean | null>;
   /** Set when the result must be fixed before the machine is used, whatever the grade. */
   safetyFinding?: string;
+  /** The finding's nature when it depends on the reading (a two-collar cut between centres is a set-up item). */
+  nature?: CheckNature;
 }
 
 export interface NotMeasured {

@@ -1,4 +1,4 @@
-import { isNotMeasured, type CheckDefinition, type CheckEvaluation } from '../check-definition';
+import { isNotMeasured, type CheckDefinition, type CheckEvaluation, type CheckNature } from '../check-definition';
 import type { CheckResult } from '../result';
 import { describeSource } from '../source-marks';
 import { bandFor } from './bands';
@@ -15,10 +15,22 @@ function detailsOf(outcome: CheckEvaluation): CheckResult['details'] {
   return { ...outcome.details, safetyFinding: outcome.safetyFinding };
 }
 
+/** The band label of a set-up or service item outside its limit: what it needs, not a wear word. */
+const NEEDS_WORDS: Readonly<Record<Exclude<CheckNature, 'condition'>, string>> = {
+  'set-up': 'Needs setting up',
+  service: 'Needs service',
+};
+
 /** Run each check module and shape its outcome as a report line with its full working. */
-export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey: S, context: C): CheckResult[] {
+export function runChecks<S, C>(
+  checks: readonly CheckDefinition<S, C>[],
+  survey: S,
+  context: C,
+  natureOf: (checkId: string) => CheckNature = () => 'condition',
+): CheckResult[] {
   return checks.map((check) => {
     const outcome = check.evaluate(survey, context);
+    const defaultNature = natureOf(check.id);
     if (isNotMeasured(outcome)) {
       return {
         id: check.id,
@@ -32,6 +44,7 @@ export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey
         bandLabel: 'Not measured',
         score: null,
         weight: check.weight,
+        nature: defaultNature,
         explanation: {
           inputs: [],
           formula: '',
@@ -44,6 +57,7 @@ export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey
     }
     const band = bandFor(outcome.q);
     const source = describeSource(outcome.permissible.source);
+    const nature = outcome.nature ?? defaultNature;
     return {
       id: check.id,
       subsystem: check.subsystem,
@@ -53,9 +67,10 @@ export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey
       permissible: outcome.permissible,
       q: roundTo(outcome.q, 4),
       band: band.band,
-      bandLabel: band.label,
+      bandLabel: nature !== 'condition' && outcome.q > 1 ? NEEDS_WORDS[nature] : band.label,
       score: roundTo(checkScore(outcome.q), 2),
       weight: check.weight,
+      nature,
       explanation: {
         inputs: outcome.inputs,
         formula: outcome.formula,

@@ -97,7 +97,7 @@ export const SLIDE_CHECKS: readonly LatheCheck[] = [
         unit: 'mm',
         // Stated over a 300 mm diameter; a face is judged over its radius, so the proportional
         // rule is applied to the diameter as the stated length is.
-        permissible: latheLimit('facing', ctx, diameterMm),
+        permissible: latheLimit('facing', ctx, facing.diameter),
         inputs: [describeLength('faced diameter', facing.diameter), describeLength('centre deviation (+ = concave)', facing.centreDeviation)],
         what: `Facing over Ø${fmt(diameterMm, 1)} mm (${faceShape(deviation)})`,
         resolution: ctx.indicatorResolutionMm,

@@ -62,7 +62,7 @@ function parallelismCheck(
       return evaluateDeviation({
         deviation: toMillimetres(reading.deviation),
         unit: 'mm',
-        permissible: latheLimit(limit, ctx, overMm),
+        permissible: latheLimit(limit, ctx, reading.over),
         inputs: [describeLength('deviation at the free end', reading.deviation), describeLength('over', reading.over)],
         what: `${label} over ${fmt(overMm, 1)} mm`,
         resolution: ctx.indicatorResolutionMm,
@@ -90,7 +90,7 @@ export const SPINDLE_CHECKS: readonly LatheCheck[] = [
       return evaluateDeviation({
         deviation: toMillimetres(far.runout),
         unit: 'mm',
-        permissible: latheLimit('testBarRunoutFar', ctx, distanceMm),
+        permissible: latheLimit('testBarRunoutFar', ctx, far.distanceFromNose),
         inputs: [describeLength('run-out', far.runout), describeLength('distance from the nose', far.distanceFromNose)],
         what: `Test bar run-out ${fmt(distanceMm, 0)} mm out`,
       });

@@ -34,7 +34,7 @@ export const TAILSTOCK_CHECKS: readonly LatheCheck[] = [
       return evaluateDeviation({
         deviation: result.offsetMm,
         unit: 'mm',
-        permissible: latheLimit('tailstockAlignment', ctx, distanceMm),
+        permissible: latheLimit('tailstockAlignment', ctx, a.distance),
         inputs: [
           describeLength('reading near headstock', a.readingNearHeadstock),
           describeLength('reading near tailstock', a.readingNearTailstock),
@@ -65,10 +65,10 @@ export const TAILSTOCK_CHECKS: readonly LatheCheck[] = [
       const correction = r.tailstockCorrection
         ? `move the tailstock ${MOVE_WORDS[r.tailstockCorrection.move]} by ${fmt(r.tailstockCorrection.byMm)} mm (${r.tailstockCorrection.basis})`
         : 'work held in the chuck: taper points to headstock alignment or bed wear, not the tailstock';
-      return evaluateDeviation({
+      const evaluation = evaluateDeviation({
         deviation: r.radialOffsetMm,
         unit: 'mm',
-        permissible: latheLimit('tailstockAlignment', ctx, collarDistanceMm),
+        permissible: latheLimit('twoCollarConsistency', ctx, t.collarDistance),
         inputs: [
           describeLength('diameter near headstock', t.diameterNearHeadstock),
           describeLength('diameter near tailstock', t.diameterNearTailstock),
@@ -85,6 +85,8 @@ export const TAILSTOCK_CHECKS: readonly LatheCheck[] = [
           moveByMm: r.tailstockCorrection ? roundTo(r.tailstockCorrection.byMm, 5) : null,
         },
       });
+      // Between centres the offset is the tailstock's set-over: an adjustment, not wear.
+      return t.setup === 'between-centres' ? { ...evaluation, nature: 'set-up' } : evaluation;
     },
   },
   {
