@@ -17,8 +17,10 @@ export type PdfCacheKey = { reportId: number; version: number; verificationCode:
  * 2: the seller's claims and landed cost page, cold/warm per section, darker faint ink.
  * 3: "1 of 1 check", not "checks".
  * 4: scores cut, not rounded, to one decimal, so none shows across its grade's edge.
+ * 5: a provisional grade says so on the cover, with its reasons; a bed with a concave stretch
+ *    beside a raised one is described as such.
  */
-export const REPORT_PDF_LAYOUT = 4;
+export const REPORT_PDF_LAYOUT = 5;
 
 export function pdfCache(dir = path.join(process.cwd(), '.data', 'report-pdfs'), layout = REPORT_PDF_LAYOUT) {
   const fileFor = (key: PdfCacheKey) => path.join(dir, `report-${key.reportId}-v${key.version}-${key.verificationCode.replace(/[^A-Z0-9-]/gi, '')}-layout${layout}.pdf`);

@@ -75,7 +75,7 @@ export default async function ReportSummaryPage({
             Version {report.version}, released {formatDate(report.releasedAt)} · {report.town}, {report.region}
           </p>
         </div>
-        <ConditionBadge grade={report.overallCondition} />
+        <ConditionBadge grade={report.overallCondition} provisional={findings?.provisional ?? false} />
       </div>
       {/* Deal-breakers head the summary whatever the grade. */}
       <DealBreakersPanel dealBreakers={findings?.dealBreakers ?? []} showsFindings={showsFindings} />
@@ -140,7 +140,15 @@ export default async function ReportSummaryPage({
               </>
             ) : null}
             <dt className="text-ink-soft">Overall condition</dt>
-            <dd className="font-medium">{report.overallCondition}</dd>
+            <dd className="font-medium">
+              {report.overallCondition}
+              {findings?.provisional ? (
+                <>
+                  , provisional
+                  <span className="mt-1 block font-normal text-ink-soft">{findings.provisionalReasons.join(' ')}</span>
+                </>
+              ) : null}
+            </dd>
           </dl>
         </Card>
         <section aria-labelledby="locked-heading" className="rounded-card border border-line bg-paper-raised p-5 shadow-sm">
