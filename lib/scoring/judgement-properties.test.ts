@@ -263,3 +263,41 @@ describe('missing evidence never helps', () => {
     );
   });
 });
+
+describe('set-up and service items apart from wear', () => {
+  it('does not drag a sound tailstock down for a 0.05 mm set-over, and prices the set-over as set-up', () => {
+    // Waygrade rule (common practice): a tailstock set over is an hour's adjustment, not wear.
+    const s: Survey = structuredClone(nearNew);
+    s.tailstock.alignmentIndicator = { readingNearHeadstock: { value: 0, unit: 'mm' }, readingNearTailstock: { value: 0.05, unit: 'mm' }, distance: { value: 300, unit: 'mm' } };
+    const r = scoreSurvey(s);
+    const tailstock = r.subsystems.find((x) => x.id === 'tailstock')!;
+    expect(gradeRank(tailstock.grade!)).toBeLessThanOrEqual(gradeRank('Very good'));
+    expect(r.checks.find((c) => c.id === 'tailstock-alignment')!.bandLabel).toBe('Needs setting up');
+    expect(r.repairEstimate.lines.find((l) => l.actionId === 'realign-tailstock')?.kind).toBe('set-up-and-service');
+  });
+
+  it('keeps the spindle grade for oil of the wrong grade, and lists the oil change as service', () => {
+    const s: Survey = structuredClone(worn);
+    const base = scoreSurvey(s).subsystems.find((x) => x.id === 'spindle-and-headstock')!;
+    s.lubrication.oilSample.declaredGrade = 32; // 57.5 mm²/s measured: VG 68 oil in a VG 32 headstock
+    const r = scoreSurvey(s);
+    const spindle = r.subsystems.find((x) => x.id === 'spindle-and-headstock')!;
+    expect(spindle.grade).toBe(base.grade);
+    expect(r.checks.find((c) => c.id === 'oil-viscosity')!.nature).toBe('service');
+  });
+
+  it('never reads "Very good" for a subsystem whose measured condition checks are all outside their limits', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1.01, max: 1.2, noNaN: true }), (share) => {
+        const s: Survey = structuredClone(nearNew);
+        // Centre height 0.04 mm, tailstock higher only [memory: ISO 1708]; quill rated 2 of 3 (q 1.5).
+        s.tailstock.centreHeightDifference = { value: 0.04 * share, unit: 'mm' };
+        s.tailstock.quillCondition = 2;
+        delete s.tailstock.quillLock;
+        const tailstock = scoreSurvey(s).subsystems.find((x) => x.id === 'tailstock')!;
+        expect(gradeRank(tailstock.grade!)).toBeGreaterThan(gradeRank('Very good'));
+      }),
+      { numRuns: 50 },
+    );
+  });
+});
