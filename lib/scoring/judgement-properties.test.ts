@@ -301,3 +301,32 @@ describe('set-up and service items apart from wear', () => {
     );
   });
 });
+
+describe('rated items', () => {
+  it('rates the oil screen, belts, cables and dials in their own words, not on the ways-wear scale', () => {
+    // Waygrade's own rubric words (common practice); the wear scale speaks of scraping marks and adjustment.
+    const s: Survey = structuredClone(worn);
+    s.lubrication.filterScreen = 2;
+    s.drive.belt.condition = 2;
+    s.electricalAndSafety.cables = 2;
+    s.slidesAndScrews.dials = 2;
+    const r = scoreSurvey(s);
+    const words = (id: string) => r.checks.find((c) => c.id === id)!.measured!.text;
+    expect(words('oil-filter-screen')).toBe('partly blocked');
+    expect(words('belt-condition')).toBe('cracked');
+    expect(words('cables')).toBe('damaged');
+    expect(words('dials')).toBe('slipping');
+  });
+});
+
+describe('the any-250 mm straightness', () => {
+  it('says why stations 250 mm apart cannot show it and what step to use', () => {
+    // Worked example: stations 250 mm apart put no station inside a 250 mm stretch; 125 mm steps put one in the middle.
+    const s: Survey = structuredClone(nearNew);
+    s.bedAndWays.levelling.stationSpacing = { value: 250, unit: 'mm' };
+    const check = scoreSurvey(s).checks.find((c) => c.id === 'bed-local-straightness')!;
+    expect(check.status).toBe('not-measured');
+    expect(check.explanation.text).toContain('at most 125 mm apart');
+    expect(check.explanation.text).toContain('chord through two stations');
+  });
+});

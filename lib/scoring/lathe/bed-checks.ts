@@ -64,7 +64,14 @@ export const BED_CHECKS: readonly LatheCheck[] = [
     evaluate(_survey, ctx) {
       const profile = ctx.bed.profile;
       if (!profile) return notMeasured(ctx.bed.unusableReason ?? 'no longitudinal level readings entered');
-      if (profile.worstLocalUm === null) return notMeasured('stations too far apart to judge any 250 mm stretch');
+      if (profile.worstLocalUm === null) {
+        // A stretch's straightness is measured against the chord through its end stations; with
+        // only two stations in 250 mm the chord passes through both and shows no deviation at all.
+        const window = profile.localWindowMm;
+        return notMeasured(
+          `stations ${fmt(ctx.bed.stationSpacingMm ?? 0, 0)} mm apart leave no station between the ends of a ${window} mm stretch, and a chord through two stations shows no deviation — level again with stations at most ${fmt(window / 2, 0)} mm apart (a level base of ${fmt(window / 2, 0)} mm or less) to judge any ${window} mm`,
+        );
+      }
       return evaluateDeviation({
         deviation: profile.worstLocalUm / 1000,
         unit: 'mm',
