@@ -330,3 +330,18 @@ describe('the any-250 mm straightness', () => {
     expect(check.explanation.text).toContain('chord through two stations');
   });
 });
+
+describe('spindle lift play', () => {
+  it('holds a rolling-bearing spindle to next to no lift, a plain-bearing one to its working clearance', () => {
+    // Plain bearings about 0.02–0.025 mm (common practice); preloaded rolling bearings next to none
+    // (common practice), taken as 0.005 mm.
+    const s: Survey = structuredClone(nearNew);
+    s.spindle.liftPlay = { value: 0.015, unit: 'mm' };
+    s.spindle.bearings = 'plain';
+    const plain = scoreSurvey(s).checks.find((c) => c.id === 'spindle-lift-play')!;
+    s.spindle.bearings = 'rolling';
+    const rolling = scoreSurvey(s).checks.find((c) => c.id === 'spindle-lift-play')!;
+    expect(plain.q).toBeCloseTo(0.6, 9);
+    expect(rolling.q).toBeCloseTo(3, 9);
+  });
+});

@@ -40,7 +40,11 @@ export const LATHE_LIMITS = {
   spindleAxialSlip: { value: 0.01, unit: 'mm', direction: 'both', classFactorApplies: true, source: memory(ISO_1708) },
   spindleLiftPlay: {
     value: 0.025, unit: 'mm', direction: 'both', classFactorApplies: false,
-    source: practice('spindle lift test on a small lathe, about 0.02–0.025 mm'),
+    source: practice('spindle lift test on a small plain-bearing lathe, about 0.02–0.025 mm'),
+  },
+  spindleLiftPlayRolling: {
+    value: 0.005, unit: 'mm', direction: 'both', classFactorApplies: false,
+    source: practice('a preloaded rolling-bearing spindle shows next to none in the lift test; 0.005 mm is about the least a 0.001–0.002 mm indicator tells from none'),
   },
   spindleParallelismVertical: {
     value: 0.02, unit: 'mm', overMm: 300, direction: 'positive-only', classFactorApplies: true,

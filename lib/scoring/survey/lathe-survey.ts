@@ -228,6 +228,10 @@ const spindleSchema = z
       .optional(),
     axialSlip: lengthSchema.describe('Axial play of the spindle (indicator on the nose face, end load applied)').optional(),
     liftPlay: lengthSchema.describe('Radial play in the lift test (bar levered up at the nose)').optional(),
+    bearings: z
+      .enum(['plain', 'rolling'])
+      .describe('Spindle bearings: plain (bronze or white-metal bushes) or rolling (preloaded taper-roller or angular-contact); sets the lift-play limit')
+      .optional(),
     parallelismVertical: parallelismSchema
       .describe('Spindle axis to carriage travel, vertical plane; deviation positive = free end of the bar higher')
       .optional(),
