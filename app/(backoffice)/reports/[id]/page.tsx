@@ -6,6 +6,7 @@ import { findCatalogueReport } from '@/db/queries/reports-catalogue';
 import { findingsOf } from '@/lib/decision/report-findings';
 import { findReportDecisionFacts } from '@/db/queries/report-decision';
 import { assessDisclosure } from '@/lib/decision/disclosure-contradictions';
+import { missingToolingMinor } from '@/lib/decision/inclusions-value';
 import { daysOnMarket, reportCurrency } from '@/lib/decision/report-currency';
 import { assessSupply } from '@/lib/decision/phase-converter';
 import { findShopSupply } from '@/db/queries/shop-supply';
@@ -202,7 +203,7 @@ export default async function ReportSummaryPage({
             currency: facts.currency,
             askingPriceMinor: facts.askingPriceMinor,
             repairsMinor: facts.repairEstimateMinor,
-            missingToolingMinor: facts.inclusions.length === 0 ? null : facts.inclusions.filter((i) => i.condition === 'missing' && i.currency === facts.currency).reduce((s, i) => s + (i.replacementCostMinor ?? 0), 0),
+            missingToolingMinor: missingToolingMinor(facts.inclusions, facts.currency),
             supply: assessSupply(
               facts.nameplate ? { ...facts.nameplate, motorKw: facts.result.machine.motorPowerKw ?? facts.motorKw } : null,
               shopSupply,
