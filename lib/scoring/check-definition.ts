@@ -38,8 +38,6 @@ export interface CheckEvaluation {
   details?: Record<string, string | number | boolean | null>;
   /** Set when the result must be fixed before the machine is used, whatever the grade. */
   safetyFinding?: string;
-  /** The finding's nature when it depends on the reading (a two-collar cut between centres is a set-up item). */
-  nature?: CheckNature;
 }
 
 export interface NotMeasured {

@@ -8,8 +8,9 @@ import { notInspectedFrom } from './grading/not-inspected';
 import { notMeasuredText } from './grading/not-measured-text';
 import { applyDamageCeilings, damageFindingsFrom, damageSafetyFindings } from './grading/damage-findings';
 import { provisionalFrom } from './grading/provisional';
-import { LATHE_CHECK_FACTS } from './lathe/check-facts';
+import { LATHE_CHECK_FACTS, latheCheckNature } from './lathe/check-facts';
 import type { CheckResult } from './result';
+import type { CheckEvaluation } from './check-definition';
 import type { NotInspectedArea } from './survey/checklist-items';
 import { bedWearSeries, powerRunNotice } from './bed-wear-series';
 import { gradeSubsystems } from './grading/subsystem-grades';
@@ -85,8 +86,13 @@ function machineSummary(survey: ParsedLatheSurvey, ctx: LatheContext): MachineSu
   };
 }
 
-const natureOf = (checkId: string) => LATHE_CHECK_FACTS[checkId]?.nature ?? 'condition';
 const areaOf = (checkId: string) => LATHE_CHECK_FACTS[checkId]?.area;
+/** Each lathe check's area and nature by its place in LATHE_CHECKS, looked up once at load. */
+const CHECK_AREAS = LATHE_CHECKS.map((c) => areaOf(c.id));
+const CHECK_NATURES = LATHE_CHECKS.map((c) => latheCheckNature(c.id, undefined));
+const TWO_COLLAR_INDEX = LATHE_CHECKS.findIndex((c) => c.id === 'two-collar-test');
+const natureAt = (index: number, details: CheckEvaluation['details']) =>
+  index === TWO_COLLAR_INDEX ? latheCheckNature(LATHE_CHECKS[index]!.id, details) : CHECK_NATURES[index]!;
 
 /**
  * The survey without the areas the inspector marked not inspected: their readings, if any were
@@ -115,11 +121,11 @@ function markNotInspected(checks: CheckResult[], reasons: ReadonlyMap<NotInspect
 export function scoreParsedSurvey(parsedSurvey: ParsedLatheSurvey, options: ScoreOptions = {}): ScoringResult {
   const { survey, reasons: notInspectedReasons } = withoutUninspectedAreas(parsedSurvey);
   const ctx = buildLatheContext(survey);
-  const checks = markNotInspected(runChecks(LATHE_CHECKS, survey, ctx, natureOf), notInspectedReasons);
+  const checks = markNotInspected(runChecks(LATHE_CHECKS, survey, ctx, natureAt), notInspectedReasons);
   const subsystems = gradeSubsystems(checks);
   const damageFindings = damageFindingsFrom(survey);
   const confidence = confidenceFrom(checks);
-  const provisional = provisionalFrom(checks, confidence, areaOf);
+  const provisional = provisionalFrom(checks, confidence, CHECK_AREAS);
   const overall = withProvisionalNote(applyDamageCeilings(overallCondition(subsystems), damageFindings), provisional.reasons);
   const catalogue = options.costCatalogue ?? defaultRepairCostCatalogue;
   const repairEstimate = estimateRepairs(checks, catalogue);

@@ -17,24 +17,34 @@ export const FIRM_GRADE_CONFIDENCE = 0.75;
 /**
  * Whether the grade is provisional, and why: confidence below FIRM_GRADE_CONFIDENCE, or a survey
  * area with checks of its own none of which was measured (a section left out or not inspected),
- * so that leaving a section out never gives a firm grade.
+ * so that leaving a section out never gives a firm grade. `areas` holds each check's area by index.
  */
 export function provisionalFrom(
   checks: readonly CheckResult[],
   confidence: ScoringResult['confidence'],
-  areaOf: (checkId: string) => NotInspectedArea | undefined,
+  areas: readonly (NotInspectedArea | undefined)[],
 ): { provisional: boolean; reasons: string[] } {
   const reasons: string[] = [];
   if (confidence.value < FIRM_GRADE_CONFIDENCE) {
     reasons.push(`Only ${fmt(confidence.value * 100, 1)} % of the check weight was measured; a firm grade needs ${fmt(FIRM_GRADE_CONFIDENCE * 100, 0)} %.`);
   }
-  const measuredByArea = new Map<NotInspectedArea, number>();
-  for (const c of checks) {
-    const area = areaOf(c.id);
-    if (!area) continue;
-    measuredByArea.set(area, (measuredByArea.get(area) ?? 0) + (c.status === 'measured' ? 1 : 0));
+  // Areas in the order their checks come, each with whether any of its checks was measured
+  // (plain arrays: this runs for every survey scored).
+  const seen: NotInspectedArea[] = [];
+  const measured: boolean[] = [];
+  for (let i = 0; i < checks.length; i++) {
+    const area = areas[i];
+    if (area === undefined) continue;
+    let k = seen.indexOf(area);
+    if (k < 0) {
+      k = seen.length;
+      seen.push(area);
+      measured.push(false);
+    }
+    if (checks[i]!.status === 'measured') measured[k] = true;
   }
-  const empty = [...measuredByArea].filter(([, n]) => n === 0).map(([area]) => AREA_LABELS[area] ?? area);
+  const empty: string[] = [];
+  for (let k = 0; k < seen.length; k++) if (!measured[k]) empty.push(AREA_LABELS[seen[k]!] ?? seen[k]!);
   if (empty.length) reasons.push(`No check measured in: ${empty.join(', ')}.`);
   return { provisional: reasons.length > 0, reasons };
 }

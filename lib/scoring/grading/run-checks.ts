@@ -26,11 +26,10 @@ export function runChecks<S, C>(
   checks: readonly CheckDefinition<S, C>[],
   survey: S,
   context: C,
-  natureOf: (checkId: string) => CheckNature = () => 'condition',
+  natureOf: (index: number, details: CheckEvaluation['details']) => CheckNature = () => 'condition',
 ): CheckResult[] {
-  return checks.map((check) => {
+  return checks.map((check, index) => {
     const outcome = check.evaluate(survey, context);
-    const defaultNature = natureOf(check.id);
     if (isNotMeasured(outcome)) {
       return {
         id: check.id,
@@ -44,7 +43,7 @@ export function runChecks<S, C>(
         bandLabel: 'Not measured',
         score: null,
         weight: check.weight,
-        nature: defaultNature,
+        nature: natureOf(index, undefined),
         explanation: {
           inputs: [],
           formula: '',
@@ -57,7 +56,7 @@ export function runChecks<S, C>(
     }
     const band = bandFor(outcome.q);
     const source = describeSource(outcome.permissible.source);
-    const nature = outcome.nature ?? defaultNature;
+    const nature = natureOf(index, outcome.details);
     return {
       id: check.id,
       subsystem: check.subsystem,

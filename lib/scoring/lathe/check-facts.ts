@@ -1,4 +1,4 @@
-import type { CheckNature } from '../check-definition';
+import type { CheckEvaluation, CheckNature } from '../check-definition';
 import type { NotInspectedArea } from '../survey/checklist-items';
 
 /**
@@ -59,10 +59,16 @@ export const LATHE_CHECK_FACTS: Readonly<Record<string, { area: NotInspectedArea
   'spindle-temperature-rise': { area: 'spindle', nature: 'condition' },
   'spindle-vibration': { area: 'spindle', nature: 'condition' },
   'tailstock-alignment': { area: 'tailstock', nature: 'set-up' },
-  // Between centres the collars' difference is the tailstock set-over (a set-up item); in the
-  // chuck it points to headstock alignment or bed wear, and the check says so itself.
+  // Between centres the collars' difference is the tailstock set-over (a set-up item, see
+  // latheCheckNature); in the chuck it points to headstock alignment or bed wear.
   'two-collar-test': { area: 'testCuts', nature: 'condition' },
   'centre-height': { area: 'tailstock', nature: 'condition' },
   'quill-condition': { area: 'tailstock', nature: 'condition' },
   'quill-lock': { area: 'tailstock', nature: 'condition' },
 };
+
+/** A check's nature, given its details: a two-collar cut between centres measures the set-over. */
+export function latheCheckNature(checkId: string, details: CheckEvaluation['details']): CheckNature {
+  if (checkId === 'two-collar-test' && details?.setup === 'between-centres') return 'set-up';
+  return LATHE_CHECK_FACTS[checkId]?.nature ?? 'condition';
+}

@@ -65,7 +65,7 @@ export const TAILSTOCK_CHECKS: readonly LatheCheck[] = [
       const correction = r.tailstockCorrection
         ? `move the tailstock ${MOVE_WORDS[r.tailstockCorrection.move]} by ${fmt(r.tailstockCorrection.byMm)} mm (${r.tailstockCorrection.basis})`
         : 'work held in the chuck: taper points to headstock alignment or bed wear, not the tailstock';
-      const evaluation = evaluateDeviation({
+      return evaluateDeviation({
         deviation: r.radialOffsetMm,
         unit: 'mm',
         permissible: latheLimit('twoCollarConsistency', ctx, t.collarDistance),
@@ -85,8 +85,6 @@ export const TAILSTOCK_CHECKS: readonly LatheCheck[] = [
           moveByMm: r.tailstockCorrection ? roundTo(r.tailstockCorrection.byMm, 5) : null,
         },
       });
-      // Between centres the offset is the tailstock's set-over: an adjustment, not wear.
-      return t.setup === 'between-centres' ? { ...evaluation, nature: 'set-up' } : evaluation;
     },
   },
   {

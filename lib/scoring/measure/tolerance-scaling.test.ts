@@ -62,8 +62,9 @@ describe('tolerance scaling by the proportional rule', () => {
 
   it('keeps the precision-lathe minimum and step off general-purpose lathes', () => {
     // Waygrade rule (common practice): proportional, not rounded, never below 0.01 mm.
-    // Worked example: 0.02 × 200/300 = 0.013 33 mm; over 100 mm 0.006 67 → 0.01.
-    expect(scaleTolerance({ valueMm: 0.02, overMm: 300 }, 200, GENERAL_PURPOSE_SCALING_RULE).valueMm).toBeCloseTo(0.0133333, 6);
+    // Worked example: 0.02 × 200/300 = 0.013 333… mm, kept to 0.000 001 mm rounded up: 0.013 334;
+    // over 100 mm 0.006 67 → the 0.01 minimum.
+    expect(scaleTolerance({ valueMm: 0.02, overMm: 300 }, 200, GENERAL_PURPOSE_SCALING_RULE).valueMm).toBe(0.013334);
     expect(scaleTolerance({ valueMm: 0.02, overMm: 300 }, 100, GENERAL_PURPOSE_SCALING_RULE).valueMm).toBe(0.01);
   });
 

@@ -46,7 +46,8 @@ export interface ScaledTolerance {
 
 /** Round up to the step; the tiny allowance removes binary noise such as 7.0000000001 steps. */
 function roundUpToStep(value: number, step: number): number {
-  if (step <= 0) return value;
+  // No step: the proportional value itself, kept to 0.000 001 mm (rounded up, so never below it).
+  if (step <= 0) return Math.ceil(value * 1e6 - 1e-6) / 1e6;
   const steps = Math.ceil(value / step - 1e-9);
   return roundTo(steps * step, 6);
 }
