@@ -4,7 +4,7 @@ import { overallCondition } from './grading/overall-condition';
 import { runChecks } from './grading/run-checks';
 import { safetyFindingsFrom } from './grading/safety-findings';
 import { dealBreakersFrom } from './grading/deal-breakers';
-import { notInspectedFrom } from './grading/not-inspected';
+import { AREA_LABELS, notInspectedFrom } from './grading/not-inspected';
 import { notMeasuredText } from './grading/not-measured-text';
 import { applyDamageCeilings, damageFindingsFrom, damageSafetyFindings } from './grading/damage-findings';
 import { provisionalFrom } from './grading/provisional';
@@ -114,7 +114,7 @@ function markNotInspected(checks: CheckResult[], reasons: ReadonlyMap<NotInspect
     const area = areaOf(c.id);
     const reason = area === undefined ? undefined : reasons.get(area);
     if (reason === undefined || c.status === 'measured') return c;
-    return { ...c, explanation: { ...c.explanation, text: notMeasuredText(`area not inspected (${reason})`) } };
+    return { ...c, explanation: { ...c.explanation, text: notMeasuredText(`area not inspected (${AREA_LABELS[area!] ?? area}; the reason is given with the area)`) } };
   });
 }
 
