@@ -24,7 +24,7 @@ const config = [
   { ignores: ['.next/**', '.next-*/**', 'node_modules/**', '.data/**', 'tmp/**', 'db/migrations/**', 'next-env.d.ts'] },
   {
     files: ['lib/scoring/**/*.ts'],
-    ignores: ['lib/scoring/cli.ts', 'lib/scoring/write-json-schema.ts', 'lib/scoring/**/*.test.ts'],
+    ignores: ['lib/scoring/cli.ts', 'lib/scoring/**/*.test.ts'],
     rules: {
       'no-restricted-imports': ['error', { patterns: SCORING_FORBIDDEN }],
       'no-restricted-globals': ['error', { name: 'fetch', message: 'lib/scoring must not do I/O.' }, { name: 'process', message: 'lib/scoring must not read the environment.' }],

@@ -11,9 +11,9 @@ const GRADE_CLASS: Record<ConditionGrade, string> = {
 
 /**
  * The overall condition as a word and a six-step gauge (more filled steps = better condition),
- * so it reads without colour, as the PDF's cover shows it.
+ * so it reads without colour, as the PDF's cover shows it; a provisional grade says so in words.
  */
-export function ConditionBadge({ grade }: { grade: ConditionGrade }) {
+export function ConditionBadge({ grade, provisional = false }: { grade: ConditionGrade; provisional?: boolean }) {
   const filled = CONDITION_GRADES.length - CONDITION_GRADES.indexOf(grade);
   return (
     <span className={`inline-flex items-center gap-2 whitespace-nowrap rounded-full border px-3 py-0.5 text-sm font-medium ${GRADE_CLASS[grade]}`}>
@@ -23,6 +23,7 @@ export function ConditionBadge({ grade }: { grade: ConditionGrade }) {
         ))}
       </svg>
       {grade}
+      {provisional ? <span className="font-normal">, provisional</span> : null}
     </span>
   );
 }

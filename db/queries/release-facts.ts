@@ -4,6 +4,7 @@ import { machineDisclosures, machineInclusions, machineMovingSheets, machines, s
 import type { Database } from '@/db/client';
 import type { ReleaseFacts } from '@/lib/decision/release-facts';
 import { surveyThermalStates } from '@/lib/survey/thermal-state';
+import { missingToolingMinor } from '@/lib/decision/inclusions-value';
 
 type Reader = Pick<Database, 'select'>;
 
@@ -46,8 +47,7 @@ export async function collectReleaseFacts(tx: Reader, input: { machineId: number
     landedCostBasis: {
       currency,
       askingPriceMinor: machine?.askingPriceMinor ?? null,
-      missingToolingMinor:
-        inclusions.length === 0 ? null : inclusions.filter((i) => i.condition === 'missing' && i.currency === currency).reduce((sum, i) => sum + (i.replacementCostMinor ?? 0), 0),
+      missingToolingMinor: missingToolingMinor(inclusions, currency),
       weightKg: moving?.weightKg ?? null,
       siteAccess: moving?.siteAccess ?? null,
       nameplate: supply ? { ...supply, motorKw } : null,

@@ -15,6 +15,7 @@ const check = (id: string, score: number | null, band: CheckResult['band'] = 'in
     bandLabel: '',
     score,
     weight: 1,
+    nature: 'condition',
     explanation: { inputs: [], formula: '', source: '', sourceMark: null, text: '' },
     details: {},
   }) as CheckResult;

@@ -110,3 +110,36 @@ describe('assessDisclosure', () => {
     expect(assessDisclosure(claims, scoreSurvey(nearNew), null).map((a) => a.claimId)).toEqual(['known-faults', 'repairs', 'crashes', 'usage', 'supply', 'included', 'sale-term']);
   });
 });
+
+describe('assessDisclosure against the hidden-damage answers and the accessories found', () => {
+  const withDamage = (ids: string[]) => {
+    const s = structuredClone(nearNew) as Record<string, unknown>;
+    s.hiddenDamage = Object.fromEntries(ids.map((id) => [id, { present: true, note: 'seen on site' }]));
+    return s;
+  };
+
+  it('contradicts "no crashes known" when the inspector recorded crash marks', () => {
+    const a = statusOf(claims, withDamage(['crashMarks'])).crashes!;
+    expect(a.status).toBe('contradicted');
+    expect(a.findings[0]).toContain('Crash marks');
+  });
+
+  it('contradicts "no repairs known" when the inspector found welds or filler', () => {
+    const a = statusOf(claims, withDamage(['welds', 'freshPaintOverFiller'])).repairs!;
+    expect(a.status).toBe('contradicted');
+    expect(a.findings).toHaveLength(2);
+  });
+
+  it('finds a declared crash borne out by crash marks', () => {
+    expect(statusOf({ ...claims, crashesOrDrops: 'Chuck hit the compound in 2019' }, withDamage(['crashMarks'])).crashes!.status).toBe('consistent');
+  });
+
+  it('contradicts the list of what is included when a listed accessory was not found', () => {
+    // near-new.json records a three-jaw and a four-jaw chuck, both steadies, a tool post, a DRO and manuals.
+    const a = statusOf({ ...claims, included: '3-jaw chuck, taper attachment' }, nearNew).included!;
+    expect(a.status).toBe('contradicted');
+    expect(a.findings).toEqual(['Listed, not found by the inspector: taper attachment']);
+    expect(statusOf({ ...claims, included: '3-jaw chuck, fixed steady and DRO' }, nearNew).included!.status).toBe('consistent');
+    expect(statusOf({ ...claims, included: '3-jaw chuck, box of tools' }, nearNew).included!.status).toBe('unconfirmed');
+  });
+});

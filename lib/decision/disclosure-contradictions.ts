@@ -38,6 +38,62 @@ export const POWER_ON_CHECKS: readonly string[] = [
 const REBUILT_SUBSYSTEMS: ReadonlySet<string> = new Set(['bed-and-ways', 'spindle-and-headstock']);
 
 const describeCheck = (c: CheckResult) => `${c.label}: ${c.bandLabel}`;
+
+/** Hidden-damage answers that speak of a crash, and of a repair (results from scoring 1.2 on). */
+const CRASH_FINDINGS: ReadonlySet<string> = new Set(['crashMarks', 'crackedCasting', 'crackedChuck']);
+const REPAIR_FINDINGS: ReadonlySet<string> = new Set(['welds', 'freshPaintOverFiller', 'nonOriginalHandles']);
+
+const damageOf = (r: ScoringResult, ids: ReadonlySet<string>) =>
+  (r.damageFindings ?? []).filter((f) => ids.has(f.id)).map((f) => `${f.label}: ${f.evidence}`);
+
+/**
+ * A claim of "none" against the findings that bear on it: contradicted when one is found. A
+ * declared event is borne out when a finding shows it, otherwise only stated (nothing seen need
+ * not mean nothing happened).
+ */
+function eventClaim(claimId: 'repairs' | 'crashes', question: string, declared: string, found: string[]): ClaimAssessment {
+  if (!declared.trim()) return { claimId, question, claim: 'None known', status: found.length ? 'contradicted' : 'not-compared', findings: found };
+  return { claimId, question, claim: declared.trim(), status: found.length ? 'consistent' : 'not-compared', findings: found };
+}
+
+/** The words a seller uses for each kind of accessory the inspector records. */
+const ACCESSORY_WORDS: readonly [kind: string, words: RegExp][] = [
+  ['three-jaw-chuck', /\b(3|three)[- ]?jaw/i],
+  ['four-jaw-chuck', /\b(4|four)[- ]?jaw/i],
+  ['collet-chuck', /collet/i],
+  ['faceplate', /face ?plate/i],
+  ['fixed-steady', /fixed steady|\bsteady rest/i],
+  ['travelling-steady', /travell?ing steady|follow(er)? rest/i],
+  ['tool-post', /tool ?post/i],
+  ['digital-readout', /\bdro\b|digital read-?out/i],
+  ['taper-attachment', /taper attachment/i],
+  ['manuals', /manual/i],
+];
+
+/**
+ * What the seller listed beside the accessories the inspector recorded: an item listed and not
+ * found contradicts the claim; items found confirm it; items whose kind the survey does not name
+ * stay unconfirmed.
+ */
+function included(d: SellerDisclosure, r: ScoringResult): ClaimAssessment {
+  const base = { claimId: 'included' as const, question: 'What is included', claim: orNone(d.included, 'Nothing listed') };
+  const check = r.checks.find((c) => c.id === 'accessories');
+  if (!d.included.trim() || !check) return { ...base, status: 'not-compared', findings: [] };
+  const found = new Set(check.status === 'measured' ? (check.measured?.text ?? '').split(', ') : []);
+  const listed = d.included.split(/[,;\n]|\band\b/).map((x) => x.trim()).filter(Boolean);
+  const missing: string[] = [];
+  const seen: string[] = [];
+  const unknown: string[] = [];
+  for (const item of listed) {
+    const kind = ACCESSORY_WORDS.find(([, words]) => words.test(item))?.[0];
+    if (kind === undefined) unknown.push(item);
+    else if (found.has(kind)) seen.push(item);
+    else missing.push(item);
+  }
+  if (missing.length) return { ...base, status: 'contradicted', findings: missing.map((m) => `Listed, not found by the inspector: ${m}`) };
+  if (unknown.length) return { ...base, status: 'unconfirmed', findings: [...seen.map((m) => `Found: ${m}`), ...unknown.map((m) => `Not recorded by kind: ${m}`)] };
+  return { ...base, status: 'consistent', findings: seen.map((m) => `Found: ${m}`) };
+}
 const orNone = (text: string, none: string) => (text.trim() ? text.trim() : none);
 
 function knownFaults(d: SellerDisclosure, r: ScoringResult): ClaimAssessment {
@@ -48,6 +104,8 @@ function knownFaults(d: SellerDisclosure, r: ScoringResult): ClaimAssessment {
     ...(r.dealBreakers ?? []).map((d) => `Deal-breaker: ${d.label}`),
     ...r.checks.filter((c) => c.band !== null && FAULT_BANDS.has(c.band)).map(describeCheck),
     ...r.safetyFindings.map((s) => `Safety: ${s.message}`),
+    // Hidden damage the inspector found (results from scoring 1.2 on), other than what is merely noted.
+    ...(r.damageFindings ?? []).filter((f) => f.consequence === 'grade-ceiling').map((f) => `Damage: ${f.label}`),
   ];
   return { ...base, claim: 'No known faults', status: findings.length ? 'contradicted' : 'consistent', findings };
 }
@@ -83,18 +141,20 @@ function supply(d: SellerDisclosure, nameplate: SupplySpec | null): ClaimAssessm
 }
 
 /**
- * Each of the seller's answers beside what the inspection found. Only claims a finding can bear on
- * are compared; the others are shown as stated, never marked true.
+ * Each of the seller's answers beside every finding that bears on it: faults, crashes and repairs
+ * against the checks and the hidden-damage answers, what is included against the accessories the
+ * inspector recorded, the supply against the nameplate, the sale term against the checks. A claim
+ * nothing bears on is shown as stated, never marked true.
  */
 export function assessDisclosure(disclosure: SellerDisclosure, result: ScoringResult, nameplate: SupplySpec | null): ClaimAssessment[] {
   const stated = (claimId: ClaimId, question: string, claim: string): ClaimAssessment => ({ claimId, question, claim, status: 'not-compared', findings: [] });
   return [
     knownFaults(disclosure, result),
-    stated('repairs', 'Repairs and rebuilds', orNone(disclosure.repairsAndRebuilds, 'None known')),
-    stated('crashes', 'Crashes or drops', orNone(disclosure.crashesOrDrops, 'None known')),
+    eventClaim('repairs', 'Repairs and rebuilds', disclosure.repairsAndRebuilds, damageOf(result, REPAIR_FINDINGS)),
+    eventClaim('crashes', 'Crashes or drops', disclosure.crashesOrDrops, damageOf(result, CRASH_FINDINGS)),
     stated('usage', 'How it was used', [USAGE_LABELS[disclosure.usage], disclosure.usageNotes.trim()].filter(Boolean).join(' — ')),
     supply(disclosure, nameplate),
-    stated('included', 'What is included', orNone(disclosure.included, 'Nothing listed')),
+    included(disclosure, result),
     saleTerm(disclosure, result),
   ];
 }

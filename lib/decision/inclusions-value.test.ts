@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DecisionInputError } from './decision-input-error';
-import { valueInclusions, type Inclusion } from './inclusions-value';
+import { missingToolingMinor, valueInclusions, type Inclusion } from './inclusions-value';
 
 const eur = (amountMinor: number) => ({ amountMinor, currency: 'EUR' });
 
@@ -32,5 +32,21 @@ describe('valueInclusions', () => {
     { description: 'DRO', condition: 'good' as const, replacementCost: eur(1.5) },
   ])('refuses %o', (item) => {
     expect(() => valueInclusions([item], 'EUR')).toThrow(DecisionInputError);
+  });
+});
+
+describe('missingToolingMinor', () => {
+  const item = (condition: 'good' | 'missing', replacementCostMinor: number | null, currency = 'EUR') => ({ condition, replacementCostMinor, currency });
+
+  it('totals the replacement cost of the items listed as missing', () => {
+    // Hand arithmetic: 55 000 + 12 000 = 67 000.
+    expect(missingToolingMinor([item('good', 60_000), item('missing', 55_000), item('missing', 12_000)], 'EUR')).toBe(67_000);
+  });
+
+  it('gives "not known", not nothing to pay, when a missing item has no price in the report currency', () => {
+    expect(missingToolingMinor([item('missing', null)], 'EUR')).toBeNull();
+    expect(missingToolingMinor([item('missing', 9_000, 'GBP')], 'EUR')).toBeNull();
+    expect(missingToolingMinor([], 'EUR')).toBeNull();
+    expect(missingToolingMinor([item('good', null)], 'EUR')).toBe(0);
   });
 });

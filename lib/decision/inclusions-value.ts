@@ -49,3 +49,26 @@ export function valueInclusions(items: readonly Inclusion[], currency: string): 
   }
   return { value: { amountMinor: value, currency }, missingCost: { amountMinor: missing, currency }, unpriced };
 }
+
+/** A listed item as stored: its condition and, when given, its replacement cost in minor units. */
+export interface StoredInclusion {
+  condition: InclusionCondition;
+  replacementCostMinor: number | null;
+  currency: string;
+}
+
+/**
+ * What it costs to replace the items listed as missing, in minor units of `currency`; null when
+ * nothing is listed, or when a missing item has no replacement cost in that currency, so unknown
+ * tooling reads "not known" rather than nothing to pay.
+ */
+export function missingToolingMinor(items: readonly StoredInclusion[], currency: string): number | null {
+  if (items.length === 0) return null;
+  let sum = 0;
+  for (const item of items) {
+    if (item.condition !== 'missing') continue;
+    if (item.replacementCostMinor === null || item.currency !== currency) return null;
+    sum += item.replacementCostMinor;
+  }
+  return sum;
+}

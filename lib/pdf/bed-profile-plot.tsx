@@ -9,6 +9,7 @@ type BedProfile = NonNullable<PlotSeries['bedProfile']>;
 const SHAPE_WORDS: Record<BedProfile['shape'], string> = {
   convex: 'convex (middle high), the direction the limit allows',
   concave: 'concave (middle low), the direction the limit does not allow',
+  mixed: 'concave over a stretch beside a raised one; the limit allows no concave stretch anywhere',
   straight: 'straight within the reading resolution',
 };
 

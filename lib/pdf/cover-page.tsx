@@ -60,6 +60,10 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
         <View style={{ ...styles.panel, flexGrow: 1, flexBasis: 0, marginRight: 10, borderLeftWidth: 3, borderLeftColor: gradeColour(grade) }}>
           <Text style={styles.factLabel}>Overall condition</Text>
           <Text style={{ fontSize: 26, fontWeight: 600, color: gradeColour(grade), lineHeight: 1.15 }}>{grade ?? 'Not graded'}</Text>
+          {/* Results scored before 1.2 carry no provisional flag and read as firm, as they were released. */}
+          {grade !== null && r.provisional === true ? (
+            <Text style={{ fontSize: 12, fontWeight: 600, lineHeight: 1.2 }}>Provisional: too little was measured to sign a firm grade</Text>
+          ) : null}
           <Text style={{ ...styles.figures, fontSize: 10, marginBottom: 8 }}>
             {r.overall.score === null ? 'No score' : `Score ${shownScore(r.overall.score, 1).toFixed(1)} of 100`}
           </Text>
@@ -68,6 +72,13 @@ export function CoverPage({ data, frame }: { data: ReportDocumentData; frame: Fr
           <Text style={{ ...styles.factValue }}>
             {confidencePercent} % of the check weight measured ({r.confidence.measuredChecks} of {r.confidence.totalChecks} check{r.confidence.totalChecks === 1 ? '' : 's'})
           </Text>
+          {r.provisional === true
+            ? (r.provisionalReasons ?? []).map((reason) => (
+                <Text key={reason} style={{ ...styles.body, fontSize: 9 }}>
+                  {reason}
+                </Text>
+              ))
+            : null}
         </View>
         <View style={{ ...styles.panel, width: 190 }}>
           <Text style={styles.factLabel}>Fair market value, as it stands</Text>

@@ -5,5 +5,9 @@
  * 2: the seller's claims and landed cost page, cold/warm per section, darker faint ink.
  * 3: "1 of 1 check", not "checks".
  * 4: scores cut, not rounded, to one decimal, so none shows across its grade's edge.
+ * 5: a provisional grade says so on the cover, with its reasons; a bed with a concave stretch
+ *    beside a raised one is described as such.
+ * 6: the valuation reads as a signed appraisal (premise, effective date, sales grid, cost approach,
+ *    liquidation evidence, reconciliation, statement).
  */
-export const REPORT_PDF_LAYOUT = 4;
+export const REPORT_PDF_LAYOUT = 6;

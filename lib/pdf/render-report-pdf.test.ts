@@ -88,7 +88,8 @@ describe('renderReportPdf', () => {
   it('prints each measured check with its measured and permissible figures and band word', () => {
     const layout = pdfToText(pdf, true);
     const straightness = result.checks.find((c) => c.id === 'bed-straightness')!;
-    const line = layout.split('\n').find((l) => l.includes(straightness.label))!;
+    // The check's own row, not a subsystem line that names it as its worst check.
+    const line = layout.split('\n').find((l) => l.includes(straightness.label) && !l.includes('score ='))!;
     expect(line).toContain('0.063 mm');
     expect(line).toContain('0.030 mm');
     expect(line).toContain(straightness.bandLabel);

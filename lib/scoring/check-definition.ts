@@ -19,6 +19,12 @@ export interface Permissible extends ValueWithUnit {
   source: SourceMark;
 }
 
+/**
+ * What a check's finding is about: condition (wear, damage, safety devices: what the grade is
+ * about), or a set-up or service item that an adjustment or an oil change puts right.
+ */
+export type CheckNature = 'condition' | 'set-up' | 'service';
+
 export interface CheckEvaluation {
   measured: ValueWithUnit & { text?: string };
   permissible: Permissible;

@@ -1,4 +1,4 @@
-import type { ValueWithUnit, Permissible } from './check-definition';
+import type { CheckNature, ValueWithUnit, Permissible } from './check-definition';
 import type { CheckBand } from './grading/bands';
 import type { ConditionGrade } from './grading/condition-scale';
 import type { SourceMark } from './source-marks';
@@ -29,6 +29,8 @@ export interface CheckResult {
   bandLabel: string;
   score: number | null;
   weight: number;
+  /** Condition (what the grade is about) or a set-up or service item (priced, listed, weighing lightly). */
+  nature: CheckNature;
   explanation: CheckExplanation;
   details: Record<string, string | number | boolean | null>;
 }
@@ -48,6 +50,20 @@ export interface SafetyFinding {
   checkId: string;
   message: string;
   action: 'fix before use';
+}
+
+/**
+ * What the inspector answered "yes" to on the hidden-damage and deal-breaker checklists, with its
+ * consequence: "fix before use" (safety), a deal-breaker, a ceiling on the overall grade, or noted.
+ */
+export interface DamageFinding {
+  id: string;
+  label: string;
+  evidence: string;
+  consequence: 'safety' | 'deal-breaker' | 'grade-ceiling' | 'noted';
+  /** The best overall grade the machine can have with this finding, when it sets one. */
+  gradeCeiling: ConditionGrade | null;
+  text: string;
 }
 
 /** A fault that heads the report whatever the grade. */
@@ -70,7 +86,7 @@ export interface PlotSeries {
     points: PlotPoint[];
     endPointLine: PlotPoint[];
     leastSquaresLine: PlotPoint[];
-    shape: 'convex' | 'concave' | 'straight';
+    shape: 'convex' | 'concave' | 'mixed' | 'straight';
   } | null;
   bedTwist: { xUnit: 'mm'; yUnit: 'mm/m'; points: PlotPoint[] } | null;
   /** Way wear along the bed (thickest station = 0), drawn beside the level profile. */
@@ -113,7 +129,16 @@ export interface ScoringResult {
     missing: { checkId: string; label: string; reason: string }[];
     explanation: string;
   };
+  /**
+   * True when the grade rests on too little evidence to sign: confidence below
+   * FIRM_GRADE_CONFIDENCE or a whole survey area without a single measured check. Shown as
+   * "provisional" wherever the grade is shown; the value is then given as a range.
+   */
+  provisional: boolean;
+  /** Why the grade is provisional, one line each (empty when it is firm). */
+  provisionalReasons: string[];
   safetyFindings: SafetyFinding[];
+  damageFindings: DamageFinding[];
   dealBreakers: DealBreaker[];
   notInspected: { id: string; label: string; reason: string }[];
   repairEstimate: RepairEstimate;

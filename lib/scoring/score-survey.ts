@@ -4,7 +4,14 @@ import { overallCondition } from './grading/overall-condition';
 import { runChecks } from './grading/run-checks';
 import { safetyFindingsFrom } from './grading/safety-findings';
 import { dealBreakersFrom } from './grading/deal-breakers';
-import { notInspectedFrom } from './grading/not-inspected';
+import { AREA_LABELS, notInspectedFrom } from './grading/not-inspected';
+import { notMeasuredText } from './grading/not-measured-text';
+import { applyDamageCeilings, damageFindingsFrom, damageSafetyFindings } from './grading/damage-findings';
+import { provisionalFrom } from './grading/provisional';
+import { LATHE_CHECK_FACTS, latheCheckNature } from './lathe/check-facts';
+import type { CheckResult } from './result';
+import type { CheckEvaluation } from './check-definition';
+import type { NotInspectedArea } from './survey/checklist-items';
 import { bedWearSeries, powerRunNotice } from './bed-wear-series';
 import { gradeSubsystems } from './grading/subsystem-grades';
 import { buildLatheContext, type LatheContext } from './lathe/lathe-context';
@@ -55,6 +62,12 @@ export function scoreSurvey(survey: unknown | LatheSurvey, options: ScoreOptions
   return outcome.result;
 }
 
+/** A provisional grade says so in its own explanation, with the reasons. */
+function withProvisionalNote(overall: ScoringResult['overall'], reasons: readonly string[]): ScoringResult['overall'] {
+  if (!reasons.length || overall.condition === null) return overall;
+  return { ...overall, explanation: `${overall.explanation} This grade is provisional: ${reasons.join(' ')}` };
+}
+
 function machineSummary(survey: ParsedLatheSurvey, ctx: LatheContext): MachineSummary {
   const m = survey.machine;
   return {
@@ -73,11 +86,47 @@ function machineSummary(survey: ParsedLatheSurvey, ctx: LatheContext): MachineSu
   };
 }
 
-export function scoreParsedSurvey(survey: ParsedLatheSurvey, options: ScoreOptions = {}): ScoringResult {
+const areaOf = (checkId: string) => LATHE_CHECK_FACTS[checkId]?.area;
+/** Each lathe check's area and nature by its place in LATHE_CHECKS, looked up once at load. */
+const CHECK_AREAS = LATHE_CHECKS.map((c) => areaOf(c.id));
+const CHECK_NATURES = LATHE_CHECKS.map((c) => latheCheckNature(c.id, undefined));
+const TWO_COLLAR_INDEX = LATHE_CHECKS.findIndex((c) => c.id === 'two-collar-test');
+const natureAt = (index: number, details: CheckEvaluation['details']) =>
+  index === TWO_COLLAR_INDEX ? latheCheckNature(LATHE_CHECKS[index]!.id, details) : CHECK_NATURES[index]!;
+
+/**
+ * The survey without the areas the inspector marked not inspected: their readings, if any were
+ * typed, are ignored, so an area not inspected is never graded.
+ */
+function withoutUninspectedAreas(survey: ParsedLatheSurvey): { survey: ParsedLatheSurvey; reasons: Map<NotInspectedArea, string> } {
+  const reasons = new Map<NotInspectedArea, string>();
+  for (const entry of survey.notInspected ?? []) if (!reasons.has(entry.area)) reasons.set(entry.area, entry.reason);
+  if (!reasons.size) return { survey, reasons };
+  const masked: Record<string, unknown> = { ...survey };
+  for (const area of reasons.keys()) delete masked[area];
+  return { survey: masked as ParsedLatheSurvey, reasons };
+}
+
+/** A check of an area not inspected says so, rather than "not entered". */
+function markNotInspected(checks: CheckResult[], reasons: ReadonlyMap<NotInspectedArea, string>): CheckResult[] {
+  if (!reasons.size) return checks;
+  return checks.map((c) => {
+    const area = areaOf(c.id);
+    const reason = area === undefined ? undefined : reasons.get(area);
+    if (reason === undefined || c.status === 'measured') return c;
+    return { ...c, explanation: { ...c.explanation, text: notMeasuredText(`area not inspected (${AREA_LABELS[area!] ?? area}; the reason is given with the area)`) } };
+  });
+}
+
+export function scoreParsedSurvey(parsedSurvey: ParsedLatheSurvey, options: ScoreOptions = {}): ScoringResult {
+  const { survey, reasons: notInspectedReasons } = withoutUninspectedAreas(parsedSurvey);
   const ctx = buildLatheContext(survey);
-  const checks = runChecks(LATHE_CHECKS, survey, ctx);
+  const checks = markNotInspected(runChecks(LATHE_CHECKS, survey, ctx, natureAt), notInspectedReasons);
   const subsystems = gradeSubsystems(checks);
-  const overall = overallCondition(subsystems);
+  const damageFindings = damageFindingsFrom(survey);
+  const confidence = confidenceFrom(checks);
+  const provisional = provisionalFrom(checks, confidence, CHECK_AREAS);
+  const overall = withProvisionalNote(applyDamageCeilings(overallCondition(subsystems), damageFindings), provisional.reasons);
   const catalogue = options.costCatalogue ?? defaultRepairCostCatalogue;
   const repairEstimate = estimateRepairs(checks, catalogue);
   const asOfYear = options.asOfYear ?? (survey.inspectedOn ? Number(survey.inspectedOn.slice(0, 4)) : null);
@@ -93,7 +142,6 @@ export function scoreParsedSurvey(survey: ParsedLatheSurvey, options: ScoreOptio
     comparableSales: options.comparableSales ?? [],
     tables: options.valuationTables ?? defaultValuationTables,
   });
-  const confidence = confidenceFrom(checks);
   const notices = [...REPORT_NOTICES];
   const powerRun = powerRunNotice(survey);
   if (powerRun) notices.push(powerRun);
@@ -106,7 +154,10 @@ export function scoreParsedSurvey(survey: ParsedLatheSurvey, options: ScoreOptio
     subsystems,
     overall,
     confidence,
-    safetyFindings: safetyFindingsFrom(checks),
+    provisional: provisional.provisional,
+    provisionalReasons: provisional.reasons,
+    safetyFindings: [...safetyFindingsFrom(checks), ...damageSafetyFindings(damageFindings)],
+    damageFindings,
     dealBreakers: dealBreakersFrom(survey),
     notInspected: notInspectedFrom(survey, confidence),
     repairEstimate,

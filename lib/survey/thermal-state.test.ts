@@ -9,14 +9,14 @@ const at = (minutes: number) => new Date(Date.parse(started) + minutes * 60_000)
 // The warm-up threshold is common practice (the half hour the temperature-rise check runs for), no published source.
 describe('sectionThermalState', () => {
   it.each([
-    ['read before the spindle was started', { startState: 'cold', minutesRunBeforeReadings: 40, startedAt: started }, { readingsAt: at(-20) }, 'cold', 'power-run-clock', 0],
-    ['read 10 min after a cold start', { startState: 'cold', minutesRunBeforeReadings: 40, startedAt: started }, { readingsAt: at(10) }, 'cold', 'power-run-clock', 10],
-    ['read exactly at the threshold', { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: started }, { readingsAt: at(WARM_AFTER_MINUTES) }, 'warm', 'power-run-clock', 30],
-    ['read 29 min 59 s after a cold start', { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: started }, { readingsAt: new Date(Date.parse(at(30)) - 1000).toISOString() }, 'cold', 'power-run-clock', 29],
-    ['without a clock, 45 min run before the readings', { startState: 'cold', minutesRunBeforeReadings: 45 }, { readingsAt: at(5) }, 'warm', 'power-run-minutes', 45],
+    ['read before the spindle was started', { startState: 'cold', minutesRunBeforeReadings: 40, startedAt: started }, { measuredAt: at(-20) }, 'cold', 'power-run-clock', 0],
+    ['read 10 min after a cold start', { startState: 'cold', minutesRunBeforeReadings: 40, startedAt: started }, { measuredAt: at(10) }, 'cold', 'power-run-clock', 10],
+    ['read exactly at the threshold', { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: started }, { measuredAt: at(WARM_AFTER_MINUTES) }, 'warm', 'power-run-clock', 30],
+    ['read 29 min 59 s after a cold start', { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: started }, { measuredAt: new Date(Date.parse(at(30)) - 1000).toISOString() }, 'cold', 'power-run-clock', 29],
+    ['without a clock, 45 min run before the readings', { startState: 'cold', minutesRunBeforeReadings: 45 }, { measuredAt: at(5) }, 'warm', 'power-run-minutes', 45],
     ['without a clock, 5 min run before the readings', { startState: 'cold', minutesRunBeforeReadings: 5 }, undefined, 'cold', 'power-run-minutes', 5],
-    ['a machine already warm at the start', { startState: 'warm', minutesRunBeforeReadings: 0, startedAt: started }, { readingsAt: at(1) }, 'warm', 'started-warm', 1],
-    ['the inspector’s own state over the log', { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: started }, { readingsAt: at(90), machineState: 'cold' }, 'cold', 'inspector', 90],
+    ['a machine already warm at the start', { startState: 'warm', minutesRunBeforeReadings: 0, startedAt: started }, { measuredAt: at(1) }, 'warm', 'started-warm', 1],
+    ['the inspector’s own state over the log', { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: started }, { measuredAt: at(90), machineState: 'cold' }, 'cold', 'inspector', 90],
     ['the inspector’s warm with no log at all', undefined, { machineState: 'warm' }, 'warm', 'inspector', null],
     ['the section’s own machineState as the inspector’s word', { startState: 'cold', minutesRunBeforeReadings: 0 }, undefined, 'warm', 'inspector', 0, 'warm'],
   ] as const)('decides %s', (_what, powerRun, thermal, state, source, minutesRun, ownState?: 'warm') => {
@@ -39,8 +39,15 @@ describe('sectionThermalState', () => {
   });
 
   it('explains a clock decision with both times', () => {
-    const result = sectionThermalState('tailstock', { thermal: { readingsAt: at(42) } }, { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: started });
-    expect(result.explanation).toBe('Read at 08:42 UTC, 42 min after the spindle was started cold at 08:00 UTC (warm from 30 min)');
+    const result = sectionThermalState('tailstock', { thermal: { measuredAt: at(42) } }, { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: started });
+    expect(result.explanation).toBe("Measured at 08:42 UTC (inspector's time), 42 min after the spindle was started cold at 08:00 UTC (warm from 30 min)");
+  });
+
+  it('goes by the power-run log, not by when notes were typed up', () => {
+    // The log says 10 min run before the readings (cold by the 30 min rule, common practice); the
+    // readings were typed four hours later. The typing clock must not make the section warm.
+    const result = sectionThermalState('spindle', { noseRunout: { value: 0.004, unit: 'mm' }, thermal: { readingsAt: at(240) } }, { startState: 'cold', minutesRunBeforeReadings: 10, startedAt: started });
+    expect(result).toMatchObject({ state: 'cold', source: 'power-run-minutes', minutesRun: 10 });
   });
 });
 
@@ -48,9 +55,9 @@ describe('surveyThermalStates', () => {
   it('lists only measured sections that hold readings, in the order of work', () => {
     const states = surveyThermalStates({
       powerRun: { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: started },
-      bedAndWays: { visualWear: 1, thermal: { readingsAt: at(-30) } },
-      spindle: { noseRunout: { value: 0.004, unit: 'mm' }, thermal: { readingsAt: at(50) } },
-      tailstock: { thermal: { readingsAt: at(60) } },
+      bedAndWays: { visualWear: 1, thermal: { measuredAt: at(-30) } },
+      spindle: { noseRunout: { value: 0.004, unit: 'mm' }, thermal: { measuredAt: at(50) } },
+      tailstock: { thermal: { measuredAt: at(60) } },
       lubrication: { leaks: 0 },
     });
     expect(states.map((s) => [s.section, s.state])).toEqual([
@@ -63,8 +70,8 @@ describe('surveyThermalStates', () => {
 describe('thermal records in the survey format', () => {
   const withThermal = JSON.parse(JSON.stringify(nearNew)) as Record<string, Record<string, unknown>>;
   withThermal.powerRun = { ...(withThermal.powerRun ?? { startState: 'cold', minutesRunBeforeReadings: 35 }), startedAt: started };
-  withThermal.spindle!.thermal = { readingsAt: at(40), machineState: 'warm' };
-  withThermal.bedAndWays!.thermal = { readingsAt: at(-10) };
+  withThermal.spindle!.thermal = { readingsAt: at(40), measuredAt: at(40), machineState: 'warm' };
+  withThermal.bedAndWays!.thermal = { measuredAt: at(-10) };
 
   it('accepts the optional records and rejects a state outside cold and warm', () => {
     expect(latheSurveySchema.safeParse(withThermal).success).toBe(true);

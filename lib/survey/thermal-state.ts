@@ -2,9 +2,11 @@
  * Whether the machine was cold or warm while each measured section's readings were taken.
  * Run-out, play, noise and the level of a bed all move as a headstock and its oil warm, so every
  * reading is read with its thermal state beside it. The inspector's own cold/warm for a section
- * wins; otherwise the state follows from the power-run log: the state at the start, when the
- * spindle was started and when the section's last reading was taken (or, without the clock, the
- * minutes run before the readings).
+ * wins; otherwise the state follows from stated times only: the power-run log (the state at the
+ * start, when the spindle was started, the minutes run before the readings) and the inspector's
+ * own time for the section (`measuredAt`). When a reading was typed (`readingsAt`) is a record of
+ * entry, never the time of measurement: notes typed up after the visit must not turn a cold
+ * reading warm or contradict the log.
  */
 
 export type MachineState = 'cold' | 'warm';
@@ -36,7 +38,7 @@ export interface SectionThermalState {
 export const MACHINE_STATE_WORDS: Record<MachineState, string> = { cold: 'Cold', warm: 'Warm' };
 
 interface ThermalRecord {
-  readingsAt?: unknown;
+  measuredAt?: unknown;
   machineState?: unknown;
 }
 interface PowerRunRecord {
@@ -65,7 +67,8 @@ function minutesWord(minutes: number): string {
 /** The state of one section, from its own record and the survey's power-run log. */
 export function sectionThermalState(section: ThermalSectionKey, sectionData: unknown, powerRun: unknown): SectionThermalState {
   const thermal = (asRecord(asRecord(sectionData)?.thermal) ?? {}) as ThermalRecord;
-  const readingsAtMs = asTime(thermal.readingsAt);
+  // The inspector's stated time for the section; the typing clock (readingsAt) is not read here.
+  const readingsAtMs = asTime(thermal.measuredAt);
   const readingsAt = readingsAtMs === null ? null : new Date(readingsAtMs).toISOString();
   const run = (asRecord(powerRun) ?? {}) as PowerRunRecord;
   const startedAtMs = asTime(run.startedAt);
@@ -89,14 +92,14 @@ export function sectionThermalState(section: ThermalSectionKey, sectionData: unk
   }
   if (clockMinutes !== null && startedAtMs !== null && readingsAtMs !== null) {
     if (clockMinutes < 0) {
-      return { ...base, state: 'cold', source: 'power-run-clock', explanation: `Read at ${clock(readingsAtMs)}, before the spindle was first started at ${clock(startedAtMs)}` };
+      return { ...base, state: 'cold', source: 'power-run-clock', explanation: `Measured at ${clock(readingsAtMs)} (inspector's time), before the spindle was first started at ${clock(startedAtMs)}` };
     }
     const state: MachineState = clockMinutes >= WARM_AFTER_MINUTES ? 'warm' : 'cold';
     return {
       ...base,
       state,
       source: 'power-run-clock',
-      explanation: `Read at ${clock(readingsAtMs)}, ${minutesWord(clockMinutes)} after the spindle was started cold at ${clock(startedAtMs)} (warm from ${WARM_AFTER_MINUTES} min)`,
+      explanation: `Measured at ${clock(readingsAtMs)} (inspector's time), ${minutesWord(clockMinutes)} after the spindle was started cold at ${clock(startedAtMs)} (warm from ${WARM_AFTER_MINUTES} min)`,
     };
   }
   if (typeof run.minutesRunBeforeReadings === 'number') {

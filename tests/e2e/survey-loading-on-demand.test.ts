@@ -6,7 +6,7 @@ import { photoFile, waitUntilSaved } from '../support/survey-steps';
 import { createInspection, createMachine } from '../support/workflow-fixtures';
 
 // The survey screen downloads the photo uploader, the live grading and the final check after it is
-// up, not with it (issue #8 budget). These are the moments that could go wrong on site: the signal
+// up, not with it (the survey's first-load budget). These are the moments that could go wrong on site: the signal
 // gone before the uploader was ever fetched, and the last screen reached with no signal.
 describe('the survey’s parts loaded on demand, on a phone with a patchy signal', () => {
   let seller: TestAccount;

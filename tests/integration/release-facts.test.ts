@@ -37,11 +37,11 @@ describe('facts kept with a released report', () => {
     ]);
     const inspectionId = await createInspection(machineId, seller.id, 'in_review', inspector.id);
     const { reportId } = await createSubmittedSurvey(inspectionId);
-    // The spindle was read 45 minutes after a cold start: warm (30 min rule, common practice).
+    // The inspector states the spindle was measured 45 minutes after a cold start: warm (30 min rule, common practice).
     const [survey] = await db.select().from(surveys).where(eq(surveys.inspectionId, inspectionId));
     const data = (typeof survey!.data === 'string' ? JSON.parse(survey!.data) : survey!.data) as Record<string, Record<string, unknown>>;
     data.powerRun = { startState: 'cold', minutesRunBeforeReadings: 0, startedAt: '2026-11-20T08:00:00.000Z' };
-    data.spindle = { ...data.spindle, thermal: { readingsAt: '2026-11-20T08:45:00.000Z' } };
+    data.spindle = { ...data.spindle, thermal: { measuredAt: '2026-11-20T08:45:00.000Z' } };
     await db.update(surveys).set({ data }).where(eq(surveys.inspectionId, inspectionId));
 
     expect(await storedFacts(reportId)).toBeNull();

@@ -38,7 +38,7 @@ describe('the survey page’s first-load JavaScript', () => {
     expect(measured.kb * 1024).toBe(gzipSync(main).byteLength + gzipSync(page).byteLength);
   });
 
-  it(`stays within ${SURVEY_FIRST_LOAD_BUDGET_KB} KB gzip (issue #8 budget) in the build under test`, () => {
+  it(`stays within ${SURVEY_FIRST_LOAD_BUDGET_KB} KB gzip (the survey's first-load budget) in the build under test`, () => {
     expect(existsSync(path.join(distDir, 'BUILD_ID')), `no build at ${distDir}`).toBe(true);
     const { files, kb } = firstLoadJs(distDir, SURVEY_ROUTE);
     expect(files.length).toBeGreaterThan(3);

@@ -16,6 +16,7 @@ const check = (id: string, weight: number, measured: boolean): CheckResult => ({
   bandLabel: '',
   score: null,
   weight,
+  nature: 'condition',
   explanation: { inputs: [], formula: '', source: '', sourceMark: null, text: notMeasuredText(`reason ${id}`) },
   details: {},
 });

@@ -1,4 +1,4 @@
-import { isNotMeasured, type CheckDefinition, type CheckEvaluation } from '../check-definition';
+import { isNotMeasured, type CheckDefinition, type CheckEvaluation, type CheckNature } from '../check-definition';
 import type { CheckResult } from '../result';
 import { describeSource } from '../source-marks';
 import { bandFor } from './bands';
@@ -15,9 +15,20 @@ function detailsOf(outcome: CheckEvaluation): CheckResult['details'] {
   return { ...outcome.details, safetyFinding: outcome.safetyFinding };
 }
 
+/** The band label of a set-up or service item outside its limit: what it needs, not a wear word. */
+const NEEDS_WORDS: Readonly<Record<Exclude<CheckNature, 'condition'>, string>> = {
+  'set-up': 'Needs setting up',
+  service: 'Needs service',
+};
+
 /** Run each check module and shape its outcome as a report line with its full working. */
-export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey: S, context: C): CheckResult[] {
-  return checks.map((check) => {
+export function runChecks<S, C>(
+  checks: readonly CheckDefinition<S, C>[],
+  survey: S,
+  context: C,
+  natureOf: (index: number, details: CheckEvaluation['details']) => CheckNature = () => 'condition',
+): CheckResult[] {
+  return checks.map((check, index) => {
     const outcome = check.evaluate(survey, context);
     if (isNotMeasured(outcome)) {
       return {
@@ -32,6 +43,7 @@ export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey
         bandLabel: 'Not measured',
         score: null,
         weight: check.weight,
+        nature: natureOf(index, undefined),
         explanation: {
           inputs: [],
           formula: '',
@@ -44,6 +56,7 @@ export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey
     }
     const band = bandFor(outcome.q);
     const source = describeSource(outcome.permissible.source);
+    const nature = natureOf(index, outcome.details);
     return {
       id: check.id,
       subsystem: check.subsystem,
@@ -53,9 +66,10 @@ export function runChecks<S, C>(checks: readonly CheckDefinition<S, C>[], survey
       permissible: outcome.permissible,
       q: roundTo(outcome.q, 4),
       band: band.band,
-      bandLabel: band.label,
+      bandLabel: nature !== 'condition' && outcome.q > 1 ? NEEDS_WORDS[nature] : band.label,
       score: roundTo(checkScore(outcome.q), 2),
       weight: check.weight,
+      nature,
       explanation: {
         inputs: outcome.inputs,
         formula: outcome.formula,

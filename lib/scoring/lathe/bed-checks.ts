@@ -20,8 +20,11 @@ export const BED_CHECKS: readonly LatheCheck[] = [
       const base = bedStraightnessLimitMm(ctx.distanceBetweenCentresMm);
       const value = roundTo((base * ctx.classFactor), 6);
       const straightnessMm = profile.endPoint.straightnessUm / 1000;
-      // Sign for the one-sided rule: a convex (middle high) bed is allowed, concave is not.
-      const signed = profile.shape === 'concave' ? -straightnessMm : straightnessMm;
+      // Sign for the one-sided rule: a convex (middle high) bed is allowed; a concave stretch
+      // anywhere is not, whatever the rest of the profile does. A bed with one fails by the larger
+      // of its deepest dip and its overall straightness, so a raised spot elsewhere never helps.
+      const concave = profile.shape === 'concave' || profile.shape === 'mixed';
+      const signed = concave ? -Math.max(straightnessMm, profile.deepestDipUm / 1000) : straightnessMm;
       const run = survey.bedAndWays!.levelling!;
       return evaluateDeviation({
         deviation: signed,
@@ -38,12 +41,14 @@ export const BED_CHECKS: readonly LatheCheck[] = [
           describeLength('station spacing', run.stationSpacing),
           `readings (divisions): ${joinNumbers(run.longitudinalReadings!)}`,
           `end-point straightness ${fmt(profile.endPoint.straightnessUm, 1)} µm, least-squares ${fmt(profile.leastSquares.straightnessUm, 1)} µm, shape ${profile.shape}`,
+          `deepest point below the chord of any stretch: ${fmt(profile.deepestDipUm, 1)} µm`,
         ],
         what: `Bed straightness (end-point reference, ${profile.shape})`,
         resolution: (0.5 * (ctx.levelSensitivityMmPerM ?? 0) * toMillimetres(run.stationSpacing)) / 1000,
-        wrongDirectionText: 'a bed may be convex but not concave',
+        wrongDirectionText: profile.shape === 'mixed' ? 'a concave stretch beside a raised one; a bed may be convex but nowhere concave' : 'a bed may be convex but not concave',
         details: {
           shape: profile.shape,
+          deepestDipUm: roundTo(profile.deepestDipUm, 2),
           endPointStraightnessUm: roundTo(profile.endPoint.straightnessUm, 2),
           leastSquaresStraightnessUm: roundTo(profile.leastSquares.straightnessUm, 2),
           formulaProfile: 'z_k = Σ r_i · s · L; deviation = max above + |max below| the reference line',
@@ -59,7 +64,14 @@ export const BED_CHECKS: readonly LatheCheck[] = [
     evaluate(_survey, ctx) {
       const profile = ctx.bed.profile;
       if (!profile) return notMeasured(ctx.bed.unusableReason ?? 'no longitudinal level readings entered');
-      if (profile.worstLocalUm === null) return notMeasured('stations too far apart to judge any 250 mm stretch');
+      if (profile.worstLocalUm === null) {
+        // A stretch's straightness is measured against the chord through its end stations; with
+        // only two stations in 250 mm the chord passes through both and shows no deviation at all.
+        const window = profile.localWindowMm;
+        return notMeasured(
+          `stations ${fmt(ctx.bed.stationSpacingMm ?? 0, 0)} mm apart leave no station between the ends of a ${window} mm stretch, and a chord through two stations shows no deviation — level again with stations at most ${fmt(window / 2, 0)} mm apart (a level base of ${fmt(window / 2, 0)} mm or less) to judge any ${window} mm`,
+        );
+      }
       return evaluateDeviation({
         deviation: profile.worstLocalUm / 1000,
         unit: 'mm',

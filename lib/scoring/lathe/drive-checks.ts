@@ -9,7 +9,7 @@ import {
 } from '../measure/v-belt';
 import { bandWordsFor } from '../grading/bands';
 import { src } from '../source-marks';
-import { NOISE_RUBRIC, WEAR_RUBRIC } from '../survey/rubrics';
+import { BELT_RUBRIC, NOISE_RUBRIC } from '../survey/rubrics';
 import { toMillimetres } from '../units/length';
 import { describeLength } from './evaluate-against-limit';
 import { evaluateRating } from './evaluate-rated';
@@ -24,7 +24,7 @@ export const DRIVE_CHECKS: readonly LatheCheck[] = [
     weight: 1,
     evaluate(s) {
       const r = s.drive?.belt?.condition ?? s.drive?.beltCondition;
-      return r === undefined ? notMeasured('not rated') : evaluateRating(r, WEAR_RUBRIC, 'V-belt');
+      return r === undefined ? notMeasured('not rated') : evaluateRating(r, BELT_RUBRIC, 'V-belt');
     },
   },
   {

@@ -1,7 +1,7 @@
 import { fmt } from '../format-number';
 import { LATHE_LIMITS } from '../limits/lathe-limits';
 import { bandFor, bandWords } from '../grading/bands';
-import { WEAR_RUBRIC } from '../survey/rubrics';
+import { CABLE_RUBRIC } from '../survey/rubrics';
 import { evaluateDeviation } from './evaluate-against-limit';
 import { evaluateDeviceState, evaluateRating } from './evaluate-rated';
 import { latheLimit } from './lathe-context';
@@ -124,7 +124,7 @@ export const ELECTRICAL_CHECKS: readonly LatheCheck[] = [
     evaluate(s) {
       const r = s.electricalAndSafety?.cables;
       if (r === undefined) return notMeasured('not rated');
-      const e = evaluateRating(r, WEAR_RUBRIC, 'Cables');
+      const e = evaluateRating(r, CABLE_RUBRIC, 'Cables');
       // Damaged sheaths or loose glands (rating 3) expose live parts.
       return r >= 3 ? { ...e, safetyFinding: `cable sheaths or glands damaged: ${FIX}` } : e;
     },

@@ -1,10 +1,10 @@
 import { classFactor, LATHE_LIMITS, swingClass, type LatheLimitId } from '../limits/lathe-limits';
 import type { Permissible } from '../check-definition';
 import { bedTwist, levelProfile, type LevelProfile, type TwistResult } from '../measure/level-profile';
-import { scaleTolerance } from '../measure/tolerance-scaling';
+import { GENERAL_PURPOSE_SCALING_RULE, IS_6040_SCALING_RULE, scaleTolerance } from '../measure/tolerance-scaling';
 import { fmt, roundTo } from '../format-number';
 import type { ParsedLatheSurvey } from '../survey/lathe-survey';
-import { toMillimetres } from '../units/length';
+import { entryResolutionMm, toMillimetres, type Length } from '../units/length';
 import { toMillimetresPerMetre } from '../units/slope';
 import { toKilowatts } from '../units/power';
 
@@ -99,20 +99,33 @@ const LIMIT_VALUE_TEXT = Object.fromEntries(
   Object.entries(LATHE_LIMITS).map(([id, entry]) => [id, fmt(entry.value)]),
 ) as Readonly<Record<LatheLimitId, string>>;
 
+/**
+ * A measuring length is taken as known to at most ±0.05 mm however coarsely it was typed, so
+ * "26 in" stays 660.4 mm and is not taken for 660 mm (Waygrade rule, common practice).
+ */
+const MAX_LENGTH_RESOLUTION_MM = 0.05;
+
 /** Permissible value for a check on this machine, with how it was arrived at. */
-export function latheLimit(id: LatheLimitId, ctx: LatheContext, measuringLengthMm?: number): Permissible {
+export function latheLimit(id: LatheLimitId, ctx: LatheContext, measuringLength?: Length): Permissible {
   const entry = LATHE_LIMITS[id];
   const factor = entry.classFactorApplies ? ctx.classFactor : 1;
   const base = entry.value * factor;
   const factorText = entry.classFactorApplies ? ctx.classFactorText : '';
   const overMm = 'overMm' in entry ? entry.overMm : undefined;
-  if (overMm !== undefined && measuringLengthMm !== undefined) {
-    const scaled = scaleTolerance({ valueMm: base, overMm }, measuringLengthMm);
+  if (overMm !== undefined && measuringLength !== undefined) {
+    // The precision-lathe minimum and rounding step apply to toolroom lathes only.
+    const rule = ctx.latheType === 'toolroom' ? IS_6040_SCALING_RULE : GENERAL_PURPOSE_SCALING_RULE;
+    const measuringLengthMm = toMillimetres(measuringLength);
+    const scaled = scaleTolerance({ valueMm: base, overMm }, measuringLengthMm, rule, Math.min(entryResolutionMm(measuringLength), MAX_LENGTH_RESOLUTION_MM));
+    const taken = scaled.lengthUsedMm === measuringLengthMm ? '' : ` (taken as ${fmt(scaled.lengthUsedMm, 1)} mm, equal within the entry's resolution)`;
+    const ruleText = rule.roundingStepMm > 0
+      ? `min ${rule.minimumMm}, rounded up to ${rule.roundingStepMm}`
+      : `min ${rule.minimumMm}, not rounded`;
     return {
       value: scaled.valueMm,
       unit: entry.unit,
       direction: entry.direction,
-      basis: `${LIMIT_VALUE_TEXT[id]}/${overMm}${factorText} scaled to ${fmt(measuringLengthMm, 1)} mm by the proportional rule (min ${scaled.rule.minimumMm}, step ${scaled.rule.roundingStepMm})`,
+      basis: `${LIMIT_VALUE_TEXT[id]}/${overMm}${factorText} scaled to ${fmt(measuringLengthMm, 1)} mm${taken} by the proportional rule (${ruleText})`,
       source: entry.source,
     };
   }

@@ -3,7 +3,7 @@ import { checkViscosityGrade, iso3448Range } from '../measure/iso3448';
 import { formatIso4406, iso4406Code, iso4406Range } from '../measure/iso4406';
 import { LATHE_LIMITS, LATHE_OIL_TARGET } from '../limits/lathe-limits';
 import { bandWordsFor } from '../grading/bands';
-import { DEBRIS_RUBRIC, LEAK_RUBRIC, OIL_CONDITION_RUBRIC, WEAR_RUBRIC } from '../survey/rubrics';
+import { DEBRIS_RUBRIC, FILTER_SCREEN_RUBRIC, LEAK_RUBRIC, OIL_CONDITION_RUBRIC } from '../survey/rubrics';
 import { evaluateDeviceState, evaluateOilLevel, evaluateRating } from './evaluate-rated';
 import { notMeasured, type LatheCheck } from './lathe-check';
 
@@ -59,7 +59,7 @@ export const LUBRICATION_CHECKS: readonly LatheCheck[] = [
     weight: 0.25,
     evaluate(s) {
       const r = s.lubrication?.filterScreen;
-      return r === undefined ? notMeasured('not rated') : evaluateRating(r, WEAR_RUBRIC, 'Filter screen');
+      return r === undefined ? notMeasured('not rated') : evaluateRating(r, FILTER_SCREEN_RUBRIC, 'Filter screen');
     },
   },
   {

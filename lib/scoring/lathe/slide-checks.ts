@@ -1,7 +1,7 @@
 import { fmt } from '../format-number';
 import { backlashMm } from '../measure/backlash';
 import { faceShape } from '../measure/facing';
-import { WEAR_RUBRIC } from '../survey/rubrics';
+import { DIAL_RUBRIC, WEAR_RUBRIC } from '../survey/rubrics';
 import type { ParsedLatheSurvey } from '../survey/lathe-survey';
 import { toMillimetres } from '../units/length';
 import { describeLength, evaluateDeviation } from './evaluate-against-limit';
@@ -79,7 +79,7 @@ export const SLIDE_CHECKS: readonly LatheCheck[] = [
     weight: 0.25,
     evaluate(s) {
       const r = s.slidesAndScrews?.dials;
-      return r === undefined ? notMeasured('not rated') : evaluateRating(r, WEAR_RUBRIC, 'Dials');
+      return r === undefined ? notMeasured('not rated') : evaluateRating(r, DIAL_RUBRIC, 'Dials');
     },
   },
   {
@@ -97,7 +97,7 @@ export const SLIDE_CHECKS: readonly LatheCheck[] = [
         unit: 'mm',
         // Stated over a 300 mm diameter; a face is judged over its radius, so the proportional
         // rule is applied to the diameter as the stated length is.
-        permissible: latheLimit('facing', ctx, diameterMm),
+        permissible: latheLimit('facing', ctx, facing.diameter),
         inputs: [describeLength('faced diameter', facing.diameter), describeLength('centre deviation (+ = concave)', facing.centreDeviation)],
         what: `Facing over Ø${fmt(diameterMm, 1)} mm (${faceShape(deviation)})`,
         resolution: ctx.indicatorResolutionMm,

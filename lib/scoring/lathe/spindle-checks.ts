@@ -62,7 +62,7 @@ function parallelismCheck(
       return evaluateDeviation({
         deviation: toMillimetres(reading.deviation),
         unit: 'mm',
-        permissible: latheLimit(limit, ctx, overMm),
+        permissible: latheLimit(limit, ctx, reading.over),
         inputs: [describeLength('deviation at the free end', reading.deviation), describeLength('over', reading.over)],
         what: `${label} over ${fmt(overMm, 1)} mm`,
         resolution: ctx.indicatorResolutionMm,
@@ -90,14 +90,38 @@ export const SPINDLE_CHECKS: readonly LatheCheck[] = [
       return evaluateDeviation({
         deviation: toMillimetres(far.runout),
         unit: 'mm',
-        permissible: latheLimit('testBarRunoutFar', ctx, distanceMm),
+        permissible: latheLimit('testBarRunoutFar', ctx, far.distanceFromNose),
         inputs: [describeLength('run-out', far.runout), describeLength('distance from the nose', far.distanceFromNose)],
         what: `Test bar run-out ${fmt(distanceMm, 0)} mm out`,
       });
     },
   },
   plainLengthCheck('spindle-axial-slip', 'Spindle axial slip', 1.5, 'spindleAxialSlip', (s) => s.spindle?.axialSlip),
-  plainLengthCheck('spindle-lift-play', 'Spindle bearing lift play', 1.5, 'spindleLiftPlay', (s) => s.spindle?.liftPlay),
+  {
+    id: 'spindle-lift-play',
+    subsystem: 'spindle-and-headstock',
+    label: 'Spindle bearing lift play',
+    weight: 1.5,
+    evaluate(survey, ctx) {
+      const play = survey.spindle?.liftPlay;
+      if (!play) return notMeasured('not measured');
+      // The limit depends on the bearings: a plain-bearing spindle runs with a working clearance,
+      // a preloaded rolling-bearing one shows next to none.
+      const bearings = survey.spindle?.bearings;
+      const limit = bearings === 'rolling' ? 'spindleLiftPlayRolling' : 'spindleLiftPlay';
+      const bearingText = bearings === undefined
+        ? 'bearing type not stated: judged by the plain-bearing limit; a rolling-bearing spindle should show next to none'
+        : `${bearings} bearings`;
+      return evaluateDeviation({
+        deviation: toMillimetres(play),
+        unit: 'mm',
+        permissible: latheLimit(limit, ctx),
+        inputs: [describeLength('Spindle bearing lift play', play), bearingText],
+        what: 'Spindle bearing lift play',
+        details: { bearings: bearings ?? null },
+      });
+    },
+  },
   parallelismCheck(
     'spindle-parallelism-vertical',
     'Spindle axis to carriage, vertical',

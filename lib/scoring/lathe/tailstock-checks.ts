@@ -34,7 +34,7 @@ export const TAILSTOCK_CHECKS: readonly LatheCheck[] = [
       return evaluateDeviation({
         deviation: result.offsetMm,
         unit: 'mm',
-        permissible: latheLimit('tailstockAlignment', ctx, distanceMm),
+        permissible: latheLimit('tailstockAlignment', ctx, a.distance),
         inputs: [
           describeLength('reading near headstock', a.readingNearHeadstock),
           describeLength('reading near tailstock', a.readingNearTailstock),
@@ -68,7 +68,7 @@ export const TAILSTOCK_CHECKS: readonly LatheCheck[] = [
       return evaluateDeviation({
         deviation: r.radialOffsetMm,
         unit: 'mm',
-        permissible: latheLimit('tailstockAlignment', ctx, collarDistanceMm),
+        permissible: latheLimit('twoCollarConsistency', ctx, t.collarDistance),
         inputs: [
           describeLength('diameter near headstock', t.diameterNearHeadstock),
           describeLength('diameter near tailstock', t.diameterNearTailstock),

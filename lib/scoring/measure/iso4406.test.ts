@@ -27,7 +27,8 @@ describe('ISO 4406 scale numbers', () => {
   });
 
   it('codes 2000/500/60 per mL as 18/16/13', () => {
-    // [src: ISO 4406:1999 table, domain.md example]
+    // [src: ISO 4406:1999 scale-number table] worked example: 2000 per mL lies in >1300–2500 (18),
+    // 500 in >320–640 (16), 60 in >40–80 (13).
     expect(formatIso4406(iso4406Code({ atLeast4um: 2000, atLeast6um: 500, atLeast14um: 60 }))).toBe('18/16/13');
   });
 

@@ -9,7 +9,11 @@ import { leastSquaresLine, lineAt, type Line, type Point } from './least-squares
  * Profiles are kept in µm for plotting because bed deviations are a few hundredths of a mm.
  */
 
-export type ProfileShape = 'convex' | 'concave' | 'straight';
+/**
+ * convex = middle high (on or above every chord), concave = middle low, mixed = a concave stretch
+ * beside a raised one (S-shaped), straight = within one instrument step of a line.
+ */
+export type ProfileShape = 'convex' | 'concave' | 'mixed' | 'straight';
 
 export interface StraightnessAgainstLine {
   line: Line;
@@ -27,10 +31,13 @@ export interface LevelProfile {
   endPoint: StraightnessAgainstLine;
   leastSquares: StraightnessAgainstLine;
   /**
-   * Shape judged against the end-point line: convex = middle high (above the chord),
-   * concave = middle low. "straight" when neither side exceeds the given resolution.
+   * Shape judged over every stretch: convex when no point lies below the chord of any stretch by
+   * more than the resolution; concave when some does and none lies above the end-point line;
+   * mixed when both; straight when neither side of the end-point line exceeds the resolution.
    */
   shape: ProfileShape;
+  /** Deepest point below the chord of any stretch of the profile, µm: how concave the worst stretch is. */
+  deepestDipUm: number;
   /** Worst straightness of any stretch no longer than the local window, against its own chord, µm. */
   worstLocalUm: number | null;
   localWindowMm: number;
@@ -104,11 +111,40 @@ export function endPointLine(points: readonly Point[]): Line {
   return { slope, intercept: first.z - slope * first.x };
 }
 
-export function profileShape(endPoint: StraightnessAgainstLine, resolutionUm: number): ProfileShape {
+/**
+ * Deepest point below the chord of any stretch i..j. The chords over a point that lie highest
+ * form the upper convex hull of the profile, so the deepest dip is the largest distance from a
+ * point down to that hull (one pass, monotone chain), not only to the end-point line.
+ */
+export function deepestDip(points: readonly Point[]): number {
+  const hull: Point[] = [];
+  for (const p of points) {
+    while (hull.length >= 2) {
+      const a = hull[hull.length - 2]!;
+      const b = hull[hull.length - 1]!;
+      // Drop b when it lies on or below the line from a to p (the hull must bend downward).
+      if ((b.z - a.z) * (p.x - a.x) <= (p.z - a.z) * (b.x - a.x)) hull.pop();
+      else break;
+    }
+    hull.push(p);
+  }
+  let deepest = 0;
+  let h = 0;
+  for (const p of points) {
+    while (h < hull.length - 2 && hull[h + 1]!.x <= p.x) h++;
+    const a = hull[h]!;
+    const b = hull[Math.min(h + 1, hull.length - 1)]!;
+    const top = b.x === a.x ? a.z : a.z + ((b.z - a.z) * (p.x - a.x)) / (b.x - a.x);
+    deepest = Math.max(deepest, top - p.z);
+  }
+  return deepest;
+}
+
+export function profileShape(endPoint: StraightnessAgainstLine, deepestDipUm: number, resolutionUm: number): ProfileShape {
   const above = endPoint.maxAboveUm;
   const below = -endPoint.maxBelowUm;
-  if (above <= resolutionUm && below <= resolutionUm) return 'straight';
-  return above >= below ? 'convex' : 'concave';
+  if (deepestDipUm <= resolutionUm) return above <= resolutionUm && below <= resolutionUm ? 'straight' : 'convex';
+  return above <= resolutionUm ? 'concave' : 'mixed';
 }
 
 /**
@@ -135,11 +171,13 @@ export function levelProfile(input: LevelProfileInput): LevelProfile {
   const points = heightProfile(input.readingsDivisions, input.sensitivityMmPerM, input.stationSpacingMm);
   const endPoint = straightnessAgainst(points, endPointLine(points));
   const leastSquares = straightnessAgainst(points, leastSquaresLine(points));
+  const deepestDipUm = deepestDip(points);
   return {
     points,
     endPoint,
     leastSquares,
-    shape: profileShape(endPoint, input.resolutionUm ?? 0),
+    shape: profileShape(endPoint, deepestDipUm, input.resolutionUm ?? 0),
+    deepestDipUm,
     worstLocalUm: worstLocalStraightness(points, localWindowMm),
     localWindowMm,
   };

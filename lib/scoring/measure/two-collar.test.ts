@@ -4,7 +4,8 @@ import { tailstockAlignmentFromIndicator } from './tailstock-alignment';
 
 describe('two-collar test', () => {
   it('gives e = 0.015 mm for 25.000 and 25.030 mm collars 300 mm apart', () => {
-    // [src: two-collar method as taught in classic lathe-operation manuals]
+    // Worked example of the two-collar method [src: as taught in classic lathe-operation manuals]:
+    // e = (25.030 − 25.000)/2 = 0.015 mm; taper on diameter 0.030 mm / 0.3 m = 0.1 mm/m.
     const r = twoCollarTest({ setup: 'between-centres', diameterNearHeadstockMm: 25, diameterNearTailstockMm: 25.03, collarDistanceMm: 300 });
     expect(r.radialOffsetMm).toBeCloseTo(0.015, 9);
     expect(r.taperMmPerM).toBeCloseTo(0.1, 9);
@@ -14,7 +15,7 @@ describe('two-collar test', () => {
   });
 
   it('gives 0.001 mm over 250 mm for collars of 29.630 and 29.632 mm', () => {
-    // common practice (practitioner's note in the seed document): an excellent tailstock alignment
+    // Worked example: e = (29.632 − 29.630)/2 = 0.001 mm; that this is an excellent alignment is common practice.
     const r = twoCollarTest({ setup: 'between-centres', diameterNearHeadstockMm: 29.63, diameterNearTailstockMm: 29.632, collarDistanceMm: 250 });
     expect(r.radialOffsetMm).toBeCloseTo(0.001, 9);
   });

@@ -8,17 +8,17 @@ describe('V-belt span and deflection', () => {
     // 3-4-5 triangle: C = 500, (D − d)/2 = 300 → t = 400.
     [500, 700, 100, 400],
   ])('gives span √(C² − ((D − d)/2)²) for C=%s D=%s d=%s as %s mm', (c, big, small, span) => {
-    // [src: belt makers' design guides]
+    // Span formula [src: belt makers' design guides]; the cases are worked examples (arithmetic beside each).
     expect(beltSpanMm({ centreDistanceMm: c, largePulleyDiameterMm: big, smallPulleyDiameterMm: small })).toBeCloseTo(span, 9);
   });
 
   it('gives 1/64 in per inch of span', () => {
-    // [src: belt makers' design guides] 32 in span → 0.5 in deflection
+    // Rule [src: belt makers' design guides]; worked example: 32 in span / 64 = 0.5 in deflection.
     expect(deflectionBySixtyFourthRule(32 * 25.4)).toBeCloseTo(0.5 * 25.4, 9);
   });
 
   it('gives 16 mm per metre of span', () => {
-    // [src: the "Fenner method"] 750 mm span → 12 mm
+    // Rule [src: the "Fenner method"]; worked example: 0.75 m span × 16 mm/m = 12 mm.
     expect(deflectionBySixteenPerMetreRule(750)).toBeCloseTo(12, 9);
   });
 

@@ -8,12 +8,21 @@ export interface RepairLine {
   label: string;
   cost: Money;
   triggeredBy: string[];
+  /**
+   * set-up-and-service: every check calling for it is a set-up or service item (an adjustment, an
+   * oil change); repair: wear or damage. The valuation may treat the two apart.
+   */
+  kind: 'set-up-and-service' | 'repair';
 }
 
 export interface RepairEstimate {
   catalogueId: string;
   lines: RepairLine[];
   total: Money;
+  /** Sum of the set-up and service lines. */
+  setUpAndServiceTotal: Money;
+  /** Sum of the wear and damage repair lines. */
+  repairTotal: Money;
   explanation: string;
 }
 
@@ -49,7 +58,9 @@ function indexOf(catalogue: RepairCostCatalogue): CatalogueIndex {
 export function estimateRepairs(checks: readonly CheckResult[], catalogue: RepairCostCatalogue): RepairEstimate {
   const { rulesByCheck, actionsById } = indexOf(catalogue);
   const triggered = new Map<string, string[]>();
+  const conditionChecks = new Set<string>();
   for (const check of checks) {
+    if (check.nature === 'condition') conditionChecks.add(check.id);
     if (check.status !== 'measured' || check.band === null) continue;
     const rules = rulesByCheck.get(check.id);
     if (!rules) continue;
@@ -72,19 +83,26 @@ export function estimateRepairs(checks: readonly CheckResult[], catalogue: Repai
   }
   const lines: RepairLine[] = [];
   let totalMinor = 0;
+  let setUpMinor = 0;
   for (const a of catalogue.actions) {
     const by = triggered.get(a.id);
     if (!by || superseded.has(a.id)) continue;
     const cost = money(a.costMinor, catalogue.currency);
     totalMinor += cost.amountMinor;
-    lines.push({ actionId: a.id, label: a.label, cost, triggeredBy: by });
+    const kind = by.some((id) => conditionChecks.has(id)) ? 'repair' : 'set-up-and-service';
+    if (kind === 'set-up-and-service') setUpMinor += cost.amountMinor;
+    lines.push({ actionId: a.id, label: a.label, cost, triggeredBy: by, kind });
   }
   const total = money(totalMinor, catalogue.currency);
+  const setUpAndServiceTotal = money(setUpMinor, catalogue.currency);
+  const repairTotal = money(totalMinor - setUpMinor, catalogue.currency);
   const droppedText = [...superseded].filter((id) => triggered.has(id));
   return {
     catalogueId: catalogue.id,
     lines,
     total,
+    setUpAndServiceTotal,
+    repairTotal,
     explanation: lines.length
       ? `${lines.length} repair actions from catalogue "${catalogue.id}"${droppedText.length ? `; ${droppedText.join(', ')} covered by heavier work` : ''}.`
       : 'No finding calls for a repair.',

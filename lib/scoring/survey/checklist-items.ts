@@ -19,6 +19,7 @@ export const DEAL_BREAKER_ITEMS = [
 ] as const;
 
 export type HiddenDamageId = (typeof HIDDEN_DAMAGE_ITEMS)[number]['id'];
+export type NotInspectedArea = (typeof NOT_INSPECTED_AREAS)[number];
 export type DealBreakerId = (typeof DEAL_BREAKER_ITEMS)[number]['id'];
 
 export const NOT_INSPECTED_AREAS = [

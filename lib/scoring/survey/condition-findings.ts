@@ -23,7 +23,11 @@ export const machineStateSchema = z
  */
 export const sectionThermalSchema = z
   .object({
-    readingsAt: z.iso.datetime().describe('When the last reading of the section was taken (UTC)').optional(),
+    readingsAt: z.iso.datetime().describe('When the last reading of the section was typed (UTC); a record of entry, not used for cold or warm').optional(),
+    measuredAt: z.iso
+      .datetime()
+      .describe("When the section was measured, as the inspector states it (UTC); with the power-run log's start it decides cold or warm")
+      .optional(),
     machineState: machineStateSchema.describe('Set by the inspector; overrides the state derived from the power-run log').optional(),
   })
   .strict();

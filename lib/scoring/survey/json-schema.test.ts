@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { surveyJsonSchemaText } from './json-schema';
 
 describe('published survey JSON Schema', () => {
-  it('matches what the zod schema generates (run lib/scoring/write-json-schema.ts after a change)', () => {
+  it('matches what the zod schema generates (run scripts/write-survey-json-schema.ts after a change)', () => {
     const committed = readFileSync(fileURLToPath(new URL('../survey.schema.json', import.meta.url)), 'utf8');
     expect(committed).toBe(surveyJsonSchemaText());
   });

@@ -23,6 +23,10 @@ import {
   oilLevelSchema,
   rubricRatingSchema,
   WEAR_RUBRIC,
+  FILTER_SCREEN_RUBRIC,
+  BELT_RUBRIC,
+  CABLE_RUBRIC,
+  DIAL_RUBRIC,
 } from './rubrics';
 import {
   carriageLockTestSchema,
@@ -114,7 +118,7 @@ const lubricationSchema = z
     oilCondition: rubricRatingSchema(OIL_CONDITION_RUBRIC).optional(),
     metalParticles: rubricRatingSchema(DEBRIS_RUBRIC).optional(),
     pumpWorking: deviceStateSchema.describe('Oil pump and pressure lines: flow seen at the sight window').optional(),
-    filterScreen: wear.describe('Filter screen state, rated as wear (0 clean … 3 blocked or torn)').optional(),
+    filterScreen: rubricRatingSchema(FILTER_SCREEN_RUBRIC).optional(),
     leaks: rubricRatingSchema(LEAK_RUBRIC).optional(),
     oilSample: oilSampleSchema.optional(),
   })
@@ -144,7 +148,7 @@ const gearboxSchema = z
 
 const beltSchema = z
   .object({
-    condition: wear.describe('Belt cracks, glazing, fraying (0 as new … 3 cracked through)').optional(),
+    condition: rubricRatingSchema(BELT_RUBRIC).optional(),
     centreDistance: positiveLengthSchema.describe('Distance between pulley centres'),
     driverPulleyDiameter: positiveLengthSchema,
     drivenPulleyDiameter: positiveLengthSchema,
@@ -157,7 +161,7 @@ const beltSchema = z
 const driveSchema = z
   .object({
     belt: beltSchema.optional(),
-    beltCondition: wear.describe('Belt condition when the drive geometry was not measured').optional(),
+    beltCondition: rubricRatingSchema(BELT_RUBRIC).describe('Belt condition when the drive geometry was not measured').optional(),
     motorNoise: noise.optional(),
     thermal: sectionThermalSchema.optional(),
   })
@@ -224,6 +228,10 @@ const spindleSchema = z
       .optional(),
     axialSlip: lengthSchema.describe('Axial play of the spindle (indicator on the nose face, end load applied)').optional(),
     liftPlay: lengthSchema.describe('Radial play in the lift test (bar levered up at the nose)').optional(),
+    bearings: z
+      .enum(['plain', 'rolling'])
+      .describe('Spindle bearings: plain (bronze or white-metal bushes) or rolling (preloaded taper-roller or angular-contact); sets the lift-play limit')
+      .optional(),
     parallelismVertical: parallelismSchema
       .describe('Spindle axis to carriage travel, vertical plane; deviation positive = free end of the bar higher')
       .optional(),
@@ -257,7 +265,7 @@ const slidesSchema = z
     topSlideBacklash: backlashSchema.optional(),
     leadscrewEndPlay: lengthSchema.optional(),
     slideWear: wear.describe('Cross and top slide dovetails and gibs').optional(),
-    dials: wear.optional(),
+    dials: rubricRatingSchema(DIAL_RUBRIC).optional(),
     thermal: sectionThermalSchema.optional(),
   })
   .strict();
@@ -322,7 +330,7 @@ const electricalSchema = z
     earthContinuity: earthResistanceSchema.optional(),
     insulationResistance: insulationResistanceSchema.optional(),
     coversInPlace: deviceStateSchema.describe('Gear, belt and cabinet covers fitted and closed').optional(),
-    cables: wear.describe('Cable sheaths, glands and strain relief').optional(),
+    cables: rubricRatingSchema(CABLE_RUBRIC).optional(),
   })
   .strict();
 

@@ -73,7 +73,62 @@ export const LEAK_RUBRIC: Rubric = {
   ],
 };
 
-export const ALL_RUBRICS = [WEAR_RUBRIC, NOISE_RUBRIC, OIL_CONDITION_RUBRIC, DEBRIS_RUBRIC, LEAK_RUBRIC] as const;
+export const FILTER_SCREEN_RUBRIC: Rubric = {
+  id: 'filter-screen',
+  title: 'Oil filter screen',
+  levels: [
+    { rating: 0, label: 'clean', meaning: 'mesh clean and whole' },
+    { rating: 1, label: 'light deposit', meaning: 'light deposit, oil passes freely' },
+    { rating: 2, label: 'partly blocked', meaning: 'sludge or fibres over part of the mesh' },
+    { rating: 3, label: 'blocked or torn', meaning: 'mesh blocked, torn or missing' },
+  ],
+};
+
+export const BELT_RUBRIC: Rubric = {
+  id: 'belt',
+  title: 'Belt condition',
+  levels: [
+    { rating: 0, label: 'supple', meaning: 'supple, sides matt and even, no cracks' },
+    { rating: 1, label: 'light glazing', meaning: 'light glazing or fine surface crazing' },
+    { rating: 2, label: 'cracked', meaning: 'cracks across the underside, shiny glazed sides or frayed edges' },
+    { rating: 3, label: 'failing', meaning: 'cracked through, pieces missing or cords showing' },
+  ],
+};
+
+export const CABLE_RUBRIC: Rubric = {
+  id: 'cables',
+  title: 'Cables and glands',
+  levels: [
+    { rating: 0, label: 'sound', meaning: 'sheaths supple and whole, glands tight, strain relief in place' },
+    { rating: 1, label: 'aged', meaning: 'sheaths stiff or scuffed, nothing cut' },
+    { rating: 2, label: 'damaged', meaning: 'sheath cut or cracked, a gland loose or strain relief missing' },
+    { rating: 3, label: 'exposed', meaning: 'inner insulation or conductors showing, or cable pulled from its gland' },
+  ],
+};
+
+export const DIAL_RUBRIC: Rubric = {
+  id: 'dials',
+  title: 'Feed dials',
+  levels: [
+    { rating: 0, label: 'clear and firm', meaning: 'figures clear, dial holds its setting' },
+    { rating: 1, label: 'worn figures', meaning: 'figures worn but readable; dial holds its setting' },
+    { rating: 2, label: 'slipping', meaning: 'dial slips or figures hard to read' },
+    { rating: 3, label: 'broken', meaning: 'dial broken, missing or unreadable' },
+  ],
+};
+
+/** Every rated item has its own words: ways and slides on the wear scale, a belt or a cable on its own. */
+export const ALL_RUBRICS = [
+  WEAR_RUBRIC,
+  NOISE_RUBRIC,
+  OIL_CONDITION_RUBRIC,
+  DEBRIS_RUBRIC,
+  LEAK_RUBRIC,
+  FILTER_SCREEN_RUBRIC,
+  BELT_RUBRIC,
+  CABLE_RUBRIC,
+  DIAL_RUBRIC,
+] as const;
 
 /** State of a safety device or function: seen working, present but faulty, or not fitted. */
 export const DEVICE_STATES = ['works', 'faulty', 'missing'] as const;

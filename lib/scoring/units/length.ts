@@ -26,3 +26,17 @@ export function toMillimetres(length: Length): number {
 export function fromMillimetres(mm: number, unit: LengthUnit): number {
   return mm / MM_PER_LENGTH_UNIT[unit];
 }
+
+/**
+ * Half a unit of the last decimal typed, in millimetres: the resolution of the entry itself
+ * ("11.811 in" is known to ±0.0005 in = ±0.0127 mm). Two lengths closer than this are the same
+ * length as far as the entry can tell.
+ */
+export function entryResolutionMm(length: Length): number {
+  const text = String(length.value);
+  const exponent = text.includes('e') ? Number(text.slice(text.indexOf('e') + 1)) : 0;
+  const mantissa = text.includes('e') ? text.slice(0, text.indexOf('e')) : text;
+  const dot = mantissa.indexOf('.');
+  const decimals = (dot < 0 ? 0 : mantissa.length - dot - 1) - exponent;
+  return 0.5 * 10 ** -decimals * MM_PER_LENGTH_UNIT[length.unit];
+}

@@ -38,7 +38,8 @@ describe('level sensitivity units', () => {
   });
 
   it.each([
-    // [src: domain.md arithmetic, 206 264.8″ per rad] 0.02 mm/m = 4.125″, 0.05 mm/m = 10.31″, 1″ = 4.848 µm/m
+    // Worked example: 1 rad = 180/π × 3600″ = 206 264.8″, so 0.02 mm/m = 0.000 02 rad × 206 264.8 = 4.125″,
+    // 0.05 mm/m = 10.31″ and 1″ = 1/206 264.8 rad = 4.848 µm/m.
     [0.02, 4.125],
     [0.05, 10.31],
     [0.004848, 1],

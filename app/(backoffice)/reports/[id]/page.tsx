@@ -8,6 +8,7 @@ import { findReportDecisionFacts } from '@/db/queries/report-decision';
 import { findSealedAndLiveMachine } from '@/db/queries/machine-snapshot';
 import { changedSinceReport, changeNoteFor, type MachineSnapshot } from '@/lib/reports/machine-snapshot';
 import { assessDisclosure } from '@/lib/decision/disclosure-contradictions';
+import { missingToolingMinor } from '@/lib/decision/inclusions-value';
 import { daysOnMarket, reportCurrency } from '@/lib/decision/report-currency';
 import { assessSupply } from '@/lib/decision/phase-converter';
 import { findShopSupply } from '@/db/queries/shop-supply';
@@ -88,7 +89,7 @@ export default async function ReportSummaryPage({
             Version {report.version}, released {formatDate(report.releasedAt)} · {report.town}, {report.region}
           </p>
         </div>
-        <ConditionBadge grade={report.overallCondition} />
+        <ConditionBadge grade={report.overallCondition} provisional={findings?.provisional ?? false} />
       </div>
       {/* Deal-breakers head the summary whatever the grade. */}
       <DealBreakersPanel dealBreakers={findings?.dealBreakers ?? []} showsFindings={showsFindings} />
@@ -168,7 +169,15 @@ export default async function ReportSummaryPage({
               </>
             ) : null}
             <dt className="text-ink-soft">Overall condition</dt>
-            <dd className="font-medium">{report.overallCondition}</dd>
+            <dd className="font-medium">
+              {report.overallCondition}
+              {findings?.provisional ? (
+                <>
+                  , provisional
+                  <span className="mt-1 block font-normal text-ink-soft">{findings.provisionalReasons.join(' ')}</span>
+                </>
+              ) : null}
+            </dd>
           </dl>
           {otherChanges.length > 0 ? (
             <div className="mt-4 border-t border-line pt-3 text-sm" data-testid="changed-since-report">
@@ -235,7 +244,7 @@ export default async function ReportSummaryPage({
             currency: facts.currency,
             askingPriceMinor: facts.askingPriceMinor,
             repairsMinor: facts.repairEstimateMinor,
-            missingToolingMinor: facts.inclusions.length === 0 ? null : facts.inclusions.filter((i) => i.condition === 'missing' && i.currency === facts.currency).reduce((s, i) => s + (i.replacementCostMinor ?? 0), 0),
+            missingToolingMinor: missingToolingMinor(facts.inclusions, facts.currency),
             supply: assessSupply(
               facts.nameplate ? { ...facts.nameplate, motorKw: facts.result.machine.motorPowerKw ?? facts.motorKw } : null,
               shopSupply,

@@ -8,7 +8,8 @@ import type { SurveyPath } from '@/lib/survey/survey-paths';
 
 /**
  * A measured section's screen with its cold/warm control on top. Every reading typed in the
- * section stamps the section's time of reading, from which its thermal state is derived.
+ * section stamps when it was typed (a record of entry); cold or warm comes from the power-run log
+ * and the time the inspector states for the section.
  */
 export function withThermalState(Screen: ComponentType<{ form: SurveyForm }>, section: ThermalSectionKey): ComponentType<{ form: SurveyForm }> {
   function ThermalSectionScreen({ form }: { form: SurveyForm }) {

@@ -5,7 +5,7 @@ import { bedTwist, levelProfile } from '@/lib/scoring/measure/level-profile';
 import { toMillimetres, type Length } from '@/lib/scoring/units/length';
 import { toMillimetresPerMetre, type Slope } from '@/lib/scoring/units/slope';
 
-const SHAPE_WORDS = { convex: 'Convex — middle high (allowed)', concave: 'Concave — middle low (not allowed)', straight: 'Straight within the level’s step' } as const;
+const SHAPE_WORDS = { convex: 'Convex — middle high (allowed)', concave: 'Concave — middle low (not allowed)', mixed: 'A concave stretch beside a raised one (not allowed)', straight: 'Straight within the level’s step' } as const;
 
 /**
  * The bed profile redrawn with every reading typed: heights by cumulative sum of the level readings,

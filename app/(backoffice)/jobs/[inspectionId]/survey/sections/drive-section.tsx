@@ -5,7 +5,7 @@ import { fromMillimetres, toMillimetres, type Length } from '@/lib/scoring/units
 import { LengthField, RatingField } from '../fields/bound-fields';
 import type { SurveyForm } from '../fields/survey-form';
 import { formatLength } from '../live/format-length';
-import { NOISE, WEAR } from './rubrics';
+import { BELT, NOISE } from './rubrics';
 import { FieldGroup } from './field-group';
 
 const at = (...path: string[]) => ['drive', ...path];
@@ -23,7 +23,7 @@ export function DriveSection({ form }: { form: SurveyForm }) {
   return (
     <div className="flex flex-col gap-5">
       <FieldGroup title="V-belt" hint="Cover off with the machine isolated. Press the belt at mid-span with a moderate thumb force.">
-        <RatingField form={form} path={at('belt', 'condition')} label="Belt condition" hint="Cracks, glazing, fraying" rubric={WEAR} />
+        <RatingField form={form} path={at('belt', 'condition')} label="Belt condition" rubric={BELT} />
         <LengthField form={form} path={at('belt', 'centreDistance')} label="Distance between pulley centres" positive />
         <LengthField form={form} path={at('belt', 'driverPulleyDiameter')} label="Motor pulley diameter" positive />
         <LengthField form={form} path={at('belt', 'drivenPulleyDiameter')} label="Driven pulley diameter" positive />

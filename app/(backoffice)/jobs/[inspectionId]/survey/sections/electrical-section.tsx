@@ -2,7 +2,7 @@
 
 import { DeviceField, QuantityField, RatingField } from '../fields/bound-fields';
 import type { SurveyForm } from '../fields/survey-form';
-import { WEAR } from './rubrics';
+import { CABLES } from './rubrics';
 import { FieldGroup } from './field-group';
 
 const at = (...path: string[]) => ['electricalAndSafety', ...path];
@@ -20,7 +20,7 @@ export function ElectricalSection({ form }: { form: SurveyForm }) {
       <FieldGroup title="Electrical tests" hint="By a qualified person, machine isolated.">
         <QuantityField form={form} path={at('earthContinuity')} label="Protective-earth continuity" unit="Ω" bounds={{ min: 0, max: 1_000_000 }} />
         <QuantityField form={form} path={at('insulationResistance')} label="Insulation resistance at 500 V DC" unit="MΩ" bounds={{ min: 0, max: 1_000_000 }} />
-        <RatingField form={form} path={at('cables')} label="Cables and glands" rubric={WEAR} />
+        <RatingField form={form} path={at('cables')} label="Cables and glands" rubric={CABLES} />
       </FieldGroup>
     </div>
   );

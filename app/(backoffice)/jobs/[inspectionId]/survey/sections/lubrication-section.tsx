@@ -2,7 +2,7 @@
 
 import { DeviceField, OilLevelField, PlainNumberField, QuantityField, RatingField, YesNoField } from '../fields/bound-fields';
 import type { SurveyForm } from '../fields/survey-form';
-import { DEBRIS, LEAKS, OIL_CONDITION, WEAR } from './rubrics';
+import { DEBRIS, FILTER_SCREEN, LEAKS, OIL_CONDITION } from './rubrics';
 import { FieldGroup } from './field-group';
 
 const at = (...path: string[]) => ['lubrication', ...path];
@@ -15,7 +15,7 @@ export function LubricationSection({ form }: { form: SurveyForm }) {
         <RatingField form={form} path={at('oilCondition')} label="Oil colour and sludge" rubric={OIL_CONDITION} />
         <RatingField form={form} path={at('metalParticles')} label="Metal in the oil" rubric={DEBRIS} />
         <DeviceField form={form} path={at('pumpWorking')} label="Oil pump and lines" hint="Flow seen at the sight window with the spindle running" />
-        <RatingField form={form} path={at('filterScreen')} label="Filter screen" hint="0 clean … 3 blocked or torn" rubric={WEAR} />
+        <RatingField form={form} path={at('filterScreen')} label="Filter screen" rubric={FILTER_SCREEN} />
         <RatingField form={form} path={at('leaks')} label="Leaks" rubric={LEAKS} />
       </FieldGroup>
       <FieldGroup title="Oil sample (if taken)" hint="From a laboratory or a portable counter; leave empty when no sample was taken.">

@@ -11,3 +11,7 @@ export const NOISE = rubric('noise');
 export const OIL_CONDITION = rubric('oil-condition');
 export const DEBRIS = rubric('debris');
 export const LEAKS = rubric('leaks');
+export const FILTER_SCREEN = rubric('filter-screen');
+export const BELT = rubric('belt');
+export const CABLES = rubric('cables');
+export const DIALS = rubric('dials');

@@ -3,7 +3,7 @@
 import { ChoiceInput } from '../fields/choice-input';
 import { LengthField, PlainNumberField, RatingField, YesNoField } from '../fields/bound-fields';
 import type { SurveyForm } from '../fields/survey-form';
-import { WEAR } from './rubrics';
+import { DIALS, WEAR } from './rubrics';
 import { FieldGroup } from './field-group';
 
 const at = (...path: string[]) => ['slidesAndScrews', ...path];
@@ -42,7 +42,7 @@ export function SlidesSection({ form }: { form: SurveyForm }) {
       <FieldGroup title="Leadscrew, slides and dials">
         <LengthField form={form} path={at('leadscrewEndPlay')} label="Leadscrew end play" />
         <RatingField form={form} path={at('slideWear')} label="Slide dovetails and gibs" rubric={WEAR} />
-        <RatingField form={form} path={at('dials')} label="Dials" rubric={WEAR} />
+        <RatingField form={form} path={at('dials')} label="Dials" rubric={DIALS} />
       </FieldGroup>
     </div>
   );

@@ -1,6 +1,6 @@
 'use client';
 
-import { LengthField, QuantityField } from '../fields/bound-fields';
+import { ChoiceField, LengthField, QuantityField } from '../fields/bound-fields';
 import type { SurveyForm } from '../fields/survey-form';
 import { FieldGroup } from './field-group';
 
@@ -18,6 +18,17 @@ export function SpindleSection({ form }: { form: SurveyForm }) {
       <FieldGroup title="Play">
         <LengthField form={form} path={at('axialSlip')} label="Axial play" hint="Indicator on the nose face, end load applied" />
         <LengthField form={form} path={at('liftPlay')} label="Lift test" hint="Bar levered up at the nose" />
+        <ChoiceField
+          form={form}
+          path={at('bearings')}
+          label="Spindle bearings"
+          hint="Sets the lift-test limit"
+          columns={2}
+          choices={[
+            { value: 'plain', label: 'Plain', meaning: 'bronze or white-metal bushes' },
+            { value: 'rolling', label: 'Rolling', meaning: 'preloaded taper-roller or angular-contact' },
+          ]}
+        />
       </FieldGroup>
       <FieldGroup title="Spindle to carriage" hint="Indicator on the carriage along a test bar. Vertical: positive = free end higher. Horizontal: positive = free end toward the tool.">
         <LengthField form={form} path={at('parallelismVertical', 'deviation')} label="Vertical deviation" signed />
