@@ -20,6 +20,7 @@ import { toMillimetres } from './units/length';
 import { defaultValuationTables, type ValuationTables } from './valuation/valuation-tables';
 import type { ComparableSale } from './valuation/valuation-types';
 import { valueMachine } from './valuation/value-machine';
+import { worstCaseEvidence } from './valuation/worst-case-evidence';
 import { SCORING_VERSION, SURVEY_FORMAT_VERSION } from './version';
 import { roundTo } from './format-number';
 
@@ -83,17 +84,25 @@ export function scoreParsedSurvey(survey: ParsedLatheSurvey, options: ScoreOptio
   const asOfYear = options.asOfYear ?? (survey.inspectedOn ? Number(survey.inspectedOn.slice(0, 4)) : null);
   const year = survey.machine.year;
   const actualAgeYears = asOfYear !== null && year !== undefined ? Math.max(0, asOfYear - year) : null;
+  const confidence = confidenceFrom(checks);
+  const safetyFindings = safetyFindingsFrom(checks);
+  const dealBreakers = dealBreakersFrom(survey);
   const valuation = valueMachine({
     latheType: ctx.latheType,
     swingMm: ctx.swingMm,
     distanceBetweenCentresMm: ctx.distanceBetweenCentresMm,
+    yearBuilt: year ?? null,
     actualAgeYears,
+    effectiveDate: survey.inspectedOn ?? null,
     condition: overall.condition,
-    repairTotal: repairEstimate.total,
+    repairs: repairEstimate,
+    safetyCheckIds: safetyFindings.map((f) => f.checkId),
+    dealBreakers,
+    confidence: confidence.value,
+    worstCase: worstCaseEvidence(checks, catalogue),
     comparableSales: options.comparableSales ?? [],
     tables: options.valuationTables ?? defaultValuationTables,
   });
-  const confidence = confidenceFrom(checks);
   const notices = [...REPORT_NOTICES];
   const powerRun = powerRunNotice(survey);
   if (powerRun) notices.push(powerRun);
@@ -106,8 +115,8 @@ export function scoreParsedSurvey(survey: ParsedLatheSurvey, options: ScoreOptio
     subsystems,
     overall,
     confidence,
-    safetyFindings: safetyFindingsFrom(checks),
-    dealBreakers: dealBreakersFrom(survey),
+    safetyFindings,
+    dealBreakers,
     notInspected: notInspectedFrom(survey, confidence),
     repairEstimate,
     valuation,
