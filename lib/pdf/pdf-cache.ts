@@ -17,8 +17,9 @@ export type PdfCacheKey = { reportId: number; version: number; verificationCode:
  * 2: the seller's claims and landed cost page, cold/warm per section, darker faint ink.
  * 3: "1 of 1 check", not "checks".
  * 4: scores cut, not rounded, to one decimal, so none shows across its grade's edge.
+ * 5: the valuation as a signed appraisal (premise, effective date, sales grid, statement); repairs split in the landed cost.
  */
-export const REPORT_PDF_LAYOUT = 4;
+export const REPORT_PDF_LAYOUT = 5;
 
 export function pdfCache(dir = path.join(process.cwd(), '.data', 'report-pdfs'), layout = REPORT_PDF_LAYOUT) {
   const fileFor = (key: PdfCacheKey) => path.join(dir, `report-${key.reportId}-v${key.version}-${key.verificationCode.replace(/[^A-Z0-9-]/gi, '')}-layout${layout}.pdf`);
