@@ -26,7 +26,7 @@ export async function loadRepairCatalogue(reader: Reader): Promise<RepairCostCat
   };
 }
 
-/** Recent sales of lathes of similar swing, newest first. */
+/** Recent sales of lathes of similar swing, newest first, with what the valuation's adjustment grid reads. */
 export async function loadComparableSales(reader: Reader, swingMm: number): Promise<ComparableSale[]> {
   const rows = await reader
     .select()
@@ -44,6 +44,9 @@ export async function loadComparableSales(reader: Reader, swingMm: number): Prom
     description: `#${row.id} ${row.description}`,
     soldOn: row.soldOn,
     swingOverBedMm: row.swingMm,
+    saleKind: row.saleKind,
+    ...(row.betweenCentresMm !== null ? { betweenCentresMm: row.betweenCentresMm } : {}),
+    ...(row.yearBuilt !== null ? { yearBuilt: row.yearBuilt } : {}),
     ...(row.condition ? { condition: row.condition } : {}),
   }));
 }

@@ -3,22 +3,46 @@ import type { Valuation } from '@/lib/scoring/valuation/valuation-types';
 import { comparablesUsed } from './comparables-used';
 
 const money = (amountMinor: number) => ({ amountMinor, currency: 'EUR' });
+const sale = (description: string, price: number, adjustment: number, outlier = false) => ({
+  description,
+  price: money(price),
+  saleKind: null,
+  soldOn: null,
+  grid: [],
+  adjustment,
+  adjusted: money(Math.round(price * adjustment)),
+  grossAdjustment: Math.abs(adjustment - 1),
+  weight: outlier ? 0 : 0.5,
+  outlier,
+});
+const noValuation = {
+  currency: 'EUR',
+  premise: { id: 'as-is-in-use', label: '', explanation: '' },
+  effectiveDate: null,
+  conditionValued: null,
+  costApproach: null,
+  salesComparison: null,
+  orderlyLiquidation: null,
+  forcedLiquidation: null,
+  reconciliation: null,
+  range: null,
+  costToCure: { beforeUse: money(0), forAccuracy: money(0), unmeasuredAllowance: money(0), deductedInValue: true },
+  notes: [],
+} satisfies Valuation;
 
 describe('comparablesUsed', () => {
-  it('traces each adjusted price back to its comparable sale by the leading #id', () => {
+  it('traces each adjusted price back to its comparable sale by the leading #id, outliers left out', () => {
     const valuation = {
-      currency: 'EUR',
-      costApproach: null,
-      reconciliation: null,
-      notes: [],
+      ...noValuation,
       salesComparison: {
         comparablesGiven: 3,
         comparablesUsed: 2,
         indicatedValue: money(500_000),
         working: [],
         adjustedPrices: [
-          { description: '#17 Corvane CL-330, 1998, auction', price: money(400_000), adjustment: 1.1, adjusted: money(440_000) },
-          { description: 'a sale without an id', price: money(600_000), adjustment: 0.9, adjusted: money(540_000) },
+          sale('#17 Corvane CL-330, 1998, auction', 400_000, 1.1),
+          sale('a sale without an id', 600_000, 0.9),
+          sale('#18 Corvane CL-330, 1971, liquidation', 90_000, 1.2, true),
         ],
       },
     } satisfies Valuation;
@@ -29,7 +53,7 @@ describe('comparablesUsed', () => {
   });
 
   it('returns nothing when the valuation had no sales comparison', () => {
-    expect(comparablesUsed({ currency: 'EUR', costApproach: null, salesComparison: null, reconciliation: null, notes: [] })).toEqual([]);
+    expect(comparablesUsed(noValuation)).toEqual([]);
     expect(comparablesUsed(null)).toEqual([]);
   });
 });

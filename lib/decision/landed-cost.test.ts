@@ -57,3 +57,27 @@ describe('landedCost', () => {
     expect(() => landedCost({ ...base, ...bad })).toThrow(DecisionInputError);
   });
 });
+
+describe('landedCost with the valuation’s repair split', () => {
+  const split = { beforeUse: eur(45_000), forAccuracy: eur(75_000), unmeasuredAllowance: eur(30_000), dealBreakers: [] };
+
+  it('keeps repairs before use apart from repairs to restore accuracy and names the unmeasured allowance', () => {
+    // 45 000 + 75 000 = the 120 000 repair estimate; the total is the same as with one repair line.
+    const r = landedCost({ ...base, repairSplit: split });
+    expect(r.lines.map((l) => l.id)).toEqual(['asking-price', 'rigging', 'converter', 'missing-tooling', 'repairs-before-use', 'repairs']);
+    expect(r.lines.find((l) => l.id === 'repairs-before-use')!.label).toBe('Repairs needed before use');
+    expect(r.lines.find((l) => l.id === 'repairs')!.label).toBe('Repairs to restore accuracy');
+    expect(r.lines.find((l) => l.id === 'repairs')!.note).toContain('EUR 300.00 for checks not measured');
+    expect(r.total.amountMinor).toBe(850_000 + 87_200 + 45_000 + 45_000 + 75_000);
+  });
+
+  it('names unpriced deal-breakers beside the repairs needed before use', () => {
+    const r = landedCost({ ...base, repairSplit: { ...split, unmeasuredAllowance: eur(0), dealBreakers: ['Cracked casting'] } });
+    expect(r.lines.find((l) => l.id === 'repairs-before-use')!.note).toMatch(/Cracked casting.*parts or rebuild/);
+    expect(r.lines.find((l) => l.id === 'repairs')!.note).toBeNull();
+  });
+
+  it('refuses a split that does not add up to the repair estimate', () => {
+    expect(() => landedCost({ ...base, repairSplit: { ...split, forAccuracy: eur(70_000) } })).toThrow(DecisionInputError);
+  });
+});

@@ -1,7 +1,27 @@
 import { DecisionInputError } from './decision-input-error';
-import type { Money } from '@/lib/scoring/money';
+import { formatMoney, type Money } from '@/lib/scoring/money';
 
-export type LandedCostLineId = 'asking-price' | 'buyers-premium' | 'tax' | 'rigging' | 'converter' | 'missing-tooling' | 'repairs';
+export type LandedCostLineId =
+  | 'asking-price'
+  | 'buyers-premium'
+  | 'tax'
+  | 'rigging'
+  | 'converter'
+  | 'missing-tooling'
+  | 'repairs-before-use'
+  | 'repairs';
+
+/**
+ * The report's repairs as its valuation deducts them (valuation.costToCure): needed before use
+ * (safety findings), to restore accuracy, and the allowance for checks not measured.
+ */
+export interface RepairSplit {
+  beforeUse: Money;
+  forAccuracy: Money;
+  unmeasuredAllowance: Money;
+  /** Deal-breakers found: not priced, the machine being valued for parts or rebuild. */
+  dealBreakers: readonly string[];
+}
 
 export interface LandedCostInput {
   currency: string;
@@ -14,6 +34,8 @@ export interface LandedCostInput {
   converter: Money | null;
   missingTooling: Money | null;
   repairs: Money | null;
+  /** When given, the repairs are shown split; before use plus accuracy must equal `repairs`. */
+  repairSplit?: RepairSplit | null;
 }
 
 export interface LandedCostLine {
@@ -46,9 +68,32 @@ function checkPercent(field: string, p: number | null) {
   if (!Number.isFinite(p) || p < 0 || p > 100) throw new DecisionInputError(field, `${field} must be a percentage from 0 to 100`);
 }
 
+function repairLines(split: RepairSplit, known: boolean): LandedCostLine[] {
+  const allowance = split.unmeasuredAllowance.amountMinor;
+  return [
+    {
+      id: 'repairs-before-use',
+      label: 'Repairs needed before use',
+      amount: known ? split.beforeUse : null,
+      note: split.dealBreakers.length
+        ? `Safety findings. Deal-breakers not priced (${split.dealBreakers.join('; ')}): the report values the machine for parts or rebuild.`
+        : 'Safety findings: fix before the machine is used.',
+    },
+    {
+      id: 'repairs',
+      label: 'Repairs to restore accuracy',
+      amount: known ? split.forAccuracy : null,
+      // Not in the total: no finding calls for it, but the valuation deducts it, so it is named here.
+      note: allowance > 0 ? `The valuation also deducts ${formatMoney(split.unmeasuredAllowance)} for checks not measured, taken at their worst; measuring them can only lower it.` : null,
+    },
+  ];
+}
+
 /**
  * What the machine costs standing in the buyer's shop: price, premium on the price, tax on price
- * plus premium, then rigging, converter, missing tooling and repairs. Percentages round half away
+ * plus premium, then rigging, converter, missing tooling and repairs (split, when the report's
+ * valuation gives the split, into before use and to restore accuracy, the figures the valuation
+ * deducts; its allowance for unmeasured checks is named beside them, not added, since no finding calls for it). Percentages round half away
  * from zero to a whole minor unit.
  */
 export function landedCost(input: LandedCostInput): LandedCost {
@@ -58,6 +103,15 @@ export function landedCost(input: LandedCostInput): LandedCost {
   checkMoney('converter', input.converter, c);
   checkMoney('missingTooling', input.missingTooling, c);
   checkMoney('repairs', input.repairs, c);
+  const split = input.repairSplit ?? null;
+  if (split) {
+    checkMoney('repairSplit.beforeUse', split.beforeUse, c);
+    checkMoney('repairSplit.forAccuracy', split.forAccuracy, c);
+    checkMoney('repairSplit.unmeasuredAllowance', split.unmeasuredAllowance, c);
+    if (input.repairs !== null && split.beforeUse.amountMinor + split.forAccuracy.amountMinor !== input.repairs.amountMinor) {
+      throw new DecisionInputError('repairSplit', 'Repairs before use and to restore accuracy must add up to the repair estimate');
+    }
+  }
   checkPercent('buyersPremiumPercent', input.buyersPremiumPercent);
   checkPercent('taxPercent', input.taxPercent);
 
@@ -75,7 +129,7 @@ export function landedCost(input: LandedCostInput): LandedCost {
     { id: 'rigging', label: 'Rigging and transport', amount: input.rigging, note: null },
     { id: 'converter', label: 'Phase converter', amount: input.converter, note: null },
     { id: 'missing-tooling', label: 'Missing tooling', amount: input.missingTooling, note: null },
-    { id: 'repairs', label: 'Repairs the findings call for', amount: input.repairs, note: null },
+    ...(split ? repairLines(split, input.repairs !== null) : [{ id: 'repairs' as const, label: 'Repairs the findings call for', amount: input.repairs, note: null }]),
   ];
   const known = lines.filter((l) => l.amount !== null);
   return {

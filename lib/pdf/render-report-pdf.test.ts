@@ -4,7 +4,8 @@ import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { scoreSurvey, type ScoringResult } from '@/lib/scoring';
+import { scoreSurvey, type ComparableSale, type ScoringResult } from '@/lib/scoring';
+import sales from '@/lib/scoring/examples/sales/comparable-sales.json';
 import { renderReportPdf } from './render-report-pdf';
 import type { ReportDocumentData } from './report-document-data';
 
@@ -32,7 +33,7 @@ describe('renderReportPdf', () => {
   let text: string;
 
   beforeAll(async () => {
-    result = scoreSurvey(survey);
+    result = scoreSurvey(survey, { comparableSales: sales as ComparableSale[] });
     const photo = await sharp({ create: { width: 320, height: 220, channels: 3, background: '#8a8f92' } }).jpeg().toBuffer();
     data = {
       reportId: 4127,
@@ -104,6 +105,22 @@ describe('renderReportPdf', () => {
     expect(text).toContain(euros(v.orderlyLiquidationValue.amountMinor));
     expect(text).toContain(euros(v.forcedLiquidationValue.amountMinor));
     expect(text).toContain('replacement cost new (RCN)');
+  });
+
+  it('prints the valuation as a signed appraisal: premise, effective date, currency, grid, approaches, statement', () => {
+    const v = result.valuation;
+    const flat = text.replace(/\s+/g, ' ');
+    expect(text).toContain('Premise of value');
+    expect(flat).toContain(v.premise.label);
+    expect(text).toContain(v.effectiveDate!);
+    expect(text).toContain('Sales comparison, the primary approach');
+    // every sale on the grid, the outlier named as such
+    for (const sale of v.salesComparison!.adjustedPrices) expect(flat).toContain(sale.description.slice(0, 20));
+    expect(flat).toContain('outlier, left out');
+    expect(text).toContain('Cost approach, by breakdown');
+    expect(text).toContain('Reconciliation');
+    expect(text).toContain('Statement');
+    expect(flat).toContain('its fee does not depend on the value');
   });
 
   it('carries the verification code, the limits of the inspection, the safety cautions and numbered pages', () => {

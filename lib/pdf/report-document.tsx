@@ -35,7 +35,7 @@ export function ReportDocument({ data }: { data: ReportDocumentData }) {
         <SubsystemPage key={s.id} subsystem={s} position={i + 1} count={subsystems.length} data={data} frame={frame} />
       ))}
       <PhotosPage photos={data.photos} frame={frame} />
-      <RepairsValuationPage result={data.result} frame={frame} />
+      <RepairsValuationPage result={data.result} frame={frame} signers={{ inspectorName: data.inspectorName, reviewerName: data.reviewerName, releasedAt: data.releasedAt }} />
       <ClaimsAndLandedCostPage facts={data.releaseFacts} result={data.result} releasedAt={data.releasedAt} frame={frame} />
       <LimitsPage data={data} frame={frame} />
     </Document>

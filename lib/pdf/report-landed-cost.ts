@@ -1,6 +1,7 @@
 import { formatMoney } from '@/lib/format';
 import type { ScoringResult } from '@/lib/scoring';
 import { landedCost, type LandedCost } from '@/lib/decision/landed-cost';
+import { repairSplitFrom } from '@/lib/decision/repair-split';
 import { assessSupply } from '@/lib/decision/phase-converter';
 import type { ReleaseFacts } from '@/lib/decision/release-facts';
 import { DEMO_RIGGING_RATES, estimateRigging, SITE_ACCESS_LABELS, STARTING_RIGGING_DISTANCE_KM, type RiggingEstimate } from '@/lib/decision/rigging-estimate';
@@ -74,7 +75,14 @@ export function reportLandedCost(basis: ReleaseFacts['landedCostBasis'], result:
   assumptions.push(basis.missingToolingMinor === null ? 'Missing tooling not known: the seller listed nothing that comes with the machine.' : 'Missing tooling: the replacement cost of what the seller listed as missing at release.');
 
   const repairs = result.repairEstimate.total.currency === c ? result.repairEstimate.total : null;
-  assumptions.push(repairs ? 'Repairs: the repair estimate in this report.' : `Repairs not in the total: the repair estimate is in ${result.repairEstimate.total.currency} and the listing in ${c}.`);
+  const repairSplit = repairSplitFrom(result, c);
+  assumptions.push(
+    !repairs
+      ? `Repairs not in the total: the repair estimate is in ${result.repairEstimate.total.currency} and the listing in ${c}.`
+      : repairSplit
+        ? 'Repairs: the repair estimate in this report, those the safety findings call for kept apart, with the allowance for unmeasured checks the valuation also deducts.'
+        : 'Repairs: the repair estimate in this report.',
+  );
 
   const cost = landedCost({
     currency: c,
@@ -85,6 +93,7 @@ export function reportLandedCost(basis: ReleaseFacts['landedCostBasis'], result:
     converter,
     missingTooling: basis.missingToolingMinor === null ? null : { amountMinor: basis.missingToolingMinor, currency: c },
     repairs,
+    repairSplit,
   });
   return { cost, rigging, assumptions };
 }

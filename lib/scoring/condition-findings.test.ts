@@ -6,10 +6,11 @@ import { scoreSurvey } from './score-survey';
 const clone = <T>(v: T): T => structuredClone(v);
 
 describe('deal-breakers in the scoring result', () => {
-  it('lists a recorded broken gear tooth even when the machine grades Excellent', () => {
+  it('lists a recorded broken gear tooth on a machine that otherwise measures Excellent, and holds it at Poor', () => {
     const survey = { ...clone(nearNew), dealBreakers: { brokenGearTeeth: { present: true, note: 'Two teeth missing on the 60T change gear' } } };
     const r = scoreSurvey(survey);
-    expect(r.overall.condition).toBe('Excellent');
+    expect(scoreSurvey(nearNew).overall.condition).toBe('Excellent');
+    expect(r.overall.condition).toBe('Poor');
     expect(r.dealBreakers).toEqual([
       { id: 'brokenGearTeeth', label: 'Broken gear teeth', evidence: 'Two teeth missing on the 60T change gear', photoRequired: true },
     ]);

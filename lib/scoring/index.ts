@@ -42,11 +42,22 @@ export { REPORT_STATEMENTS, GRADE_SCALE_TEXT } from './report-statements';
 export { defaultRepairCostCatalogue } from './repair/default-repair-cost-catalogue';
 export type { RepairCostCatalogue, RepairAction, RepairRule } from './repair/cost-catalogue';
 export { estimateRepairs, type RepairEstimate, type RepairLine } from './repair/repair-estimate';
-export { defaultValuationTables, type ValuationTables } from './valuation/valuation-tables';
-export type { ComparableSale, Valuation, CostApproach, SalesComparison, Reconciliation } from './valuation/valuation-types';
-export { percentGoodByAgeLife, effectiveAge } from './valuation/age-life';
+export { defaultValuationTables, SALE_KINDS, type SaleKind, type ValuationTables } from './valuation/valuation-tables';
+export type {
+  AdjustedSale,
+  ComparableSale,
+  CostApproach,
+  GridAdjustment,
+  LiquidationValue,
+  Reconciliation,
+  SalesComparison,
+  Valuation,
+  ValuePremise,
+  ValueRange,
+} from './valuation/valuation-types';
+export { percentGoodByAgeLife, percentGoodLevelled, effectiveAge } from './valuation/age-life';
 export { costApproach } from './valuation/cost-approach';
-export { salesComparison } from './valuation/sales-comparison';
+export { salesComparison, gridPercent } from './valuation/sales-comparison';
 export { reconcile } from './valuation/reconciliation';
 export { money, formatMoney, type Money } from './money';
 

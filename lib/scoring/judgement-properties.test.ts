@@ -4,7 +4,7 @@ import nearNew from './examples/near-new.json';
 import worn from './examples/worn.json';
 import inchUnits from './examples/inch-units.json';
 import mostlyUnmeasured from './examples/mostly-unmeasured.json';
-import { HIDDEN_DAMAGE_ITEMS, NOT_INSPECTED_AREAS } from './survey/checklist-items';
+import { DEAL_BREAKER_ITEMS, HIDDEN_DAMAGE_ITEMS, NOT_INSPECTED_AREAS } from './survey/checklist-items';
 import { latheSurveySchema } from './survey/lathe-survey';
 import { scoreSurvey } from './score-survey';
 import { gradeRank } from './grading/condition-scale';
@@ -193,6 +193,22 @@ describe('what the inspector found reaches the grade', () => {
     const r = scoreSurvey(s);
     expect(r.dealBreakers.map((d) => d.id)).toEqual(['crackedCasting']);
     expect(r.damageFindings.find((f) => f.id === 'crackedCasting')?.consequence).toBe('deal-breaker');
+  });
+
+  it('never grades a machine with any deal-breaker better than Poor, nor better than without it', () => {
+    // Waygrade rule (common practice): a deal-breaker usually costs more to put right than the machine
+    // is worth, so "major repairs needed before productive use" is the best it can read.
+    fc.assert(
+      fc.property(fc.constantFrom(...BASES), fc.subarray(DEAL_BREAKER_ITEMS.map((i) => i.id), { minLength: 1 }), (base, ids) => {
+        const s: Survey = structuredClone(base);
+        s.dealBreakers = Object.fromEntries(ids.map((id) => [id, { present: true }]));
+        const r = scoreSurvey(s);
+        expect(r.dealBreakers.map((d) => d.id).sort()).toEqual([...ids].sort());
+        expect(gradeOf(r)).toBeGreaterThanOrEqual(gradeRank('Poor'));
+        expect(gradeOf(r)).toBeGreaterThanOrEqual(gradeOf(scoreSurvey(base)));
+      }),
+      { numRuns: 40 },
+    );
   });
 });
 

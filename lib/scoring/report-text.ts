@@ -56,6 +56,8 @@ export function formatReportText(r: ScoringResult): string {
   lines.push('');
   const v = r.valuation;
   lines.push('VALUATION:');
+  lines.push(`  Premise: ${v.premise.label}; effective date ${v.effectiveDate ?? 'not stated'}; currency ${v.currency}`);
+  if (v.range) lines.push(`  Range: ${v.range.explanation}`);
   if (v.costApproach) {
     lines.push('  Cost approach:');
     for (const w of v.costApproach.working) lines.push(`    ${w}`);

@@ -90,8 +90,12 @@ describe('scoreSurvey on the example surveys', () => {
 
   it('adds a sales comparison and reconciliation when five or more sales are given', () => {
     const r = scoreSurvey(worn, { comparableSales: sales as ComparableSale[] });
-    expect(r.valuation.salesComparison?.comparablesUsed).toBe(6);
-    expect(r.valuation.reconciliation?.weights.salesComparison).toBeCloseTo(0.6, 9);
+    // 12 example sales: one without a condition grade is left out, one (sale J, a rebuilt bed) is an
+    // outlier shown on the grid; 10 are weighed. Sales comparison is primary: weight 0.75.
+    expect(r.valuation.salesComparison?.adjustedPrices).toHaveLength(11);
+    expect(r.valuation.salesComparison?.adjustedPrices.filter((p) => p.outlier).map((p) => p.description)).toEqual([expect.stringContaining('demo sale J')]);
+    expect(r.valuation.salesComparison?.comparablesUsed).toBe(10);
+    expect(r.valuation.reconciliation?.weights.salesComparison).toBeCloseTo(0.75, 9);
     const without = scoreSurvey(worn);
     expect(without.valuation.salesComparison).toBeNull();
     expect(without.valuation.reconciliation?.fairMarketValue).toEqual(without.valuation.costApproach?.fairMarketValue);

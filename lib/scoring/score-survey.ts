@@ -27,6 +27,7 @@ import { toMillimetres } from './units/length';
 import { defaultValuationTables, type ValuationTables } from './valuation/valuation-tables';
 import type { ComparableSale } from './valuation/valuation-types';
 import { valueMachine } from './valuation/value-machine';
+import { worstCaseEvidence } from './valuation/worst-case-evidence';
 import { SCORING_VERSION, SURVEY_FORMAT_VERSION } from './version';
 import { roundTo } from './format-number';
 
@@ -132,13 +133,21 @@ export function scoreParsedSurvey(parsedSurvey: ParsedLatheSurvey, options: Scor
   const asOfYear = options.asOfYear ?? (survey.inspectedOn ? Number(survey.inspectedOn.slice(0, 4)) : null);
   const year = survey.machine.year;
   const actualAgeYears = asOfYear !== null && year !== undefined ? Math.max(0, asOfYear - year) : null;
+  const safetyFindings = [...safetyFindingsFrom(checks), ...damageSafetyFindings(damageFindings)];
+  const dealBreakers = dealBreakersFrom(survey);
   const valuation = valueMachine({
     latheType: ctx.latheType,
     swingMm: ctx.swingMm,
     distanceBetweenCentresMm: ctx.distanceBetweenCentresMm,
+    yearBuilt: year ?? null,
     actualAgeYears,
+    effectiveDate: survey.inspectedOn ?? null,
     condition: overall.condition,
-    repairTotal: repairEstimate.total,
+    repairs: repairEstimate,
+    safetyCheckIds: safetyFindings.map((f) => f.checkId),
+    dealBreakers,
+    confidence: confidence.value,
+    worstCase: worstCaseEvidence(checks, catalogue),
     comparableSales: options.comparableSales ?? [],
     tables: options.valuationTables ?? defaultValuationTables,
   });
@@ -156,9 +165,9 @@ export function scoreParsedSurvey(parsedSurvey: ParsedLatheSurvey, options: Scor
     confidence,
     provisional: provisional.provisional,
     provisionalReasons: provisional.reasons,
-    safetyFindings: [...safetyFindingsFrom(checks), ...damageSafetyFindings(damageFindings)],
+    safetyFindings,
     damageFindings,
-    dealBreakers: dealBreakersFrom(survey),
+    dealBreakers,
     notInspected: notInspectedFrom(survey, confidence),
     repairEstimate,
     valuation,

@@ -7,7 +7,9 @@
  * 1.2.0: units never change a verdict (lengths equal within the entry's resolution, scaled limits
  * rounded up, the precision-lathe minimum and step for toolroom lathes only); a concave stretch
  * anywhere fails the bed; hidden damage reaches the grade; areas not inspected are not graded;
- * provisional grades; set-up and service items apart from wear; two-collar limit 0.02 radial/300.
+ * provisional grades; set-up and service items apart from wear; two-collar limit 0.02 radial/300;
+ * a deal-breaker holds the grade at Poor; the valuation by sales grid, breakdown cost approach,
+ * liquidation evidence and a parts-or-rebuild premise for deal-breakers.
  */
 export const SCORING_VERSION = '1.2.0';
 

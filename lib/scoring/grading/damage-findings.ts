@@ -42,11 +42,18 @@ const HIDDEN_DAMAGE_CONSEQUENCES: Readonly<Record<HiddenDamageId, { consequence:
   },
 };
 
+/**
+ * A deal-breaker usually costs more to put right than the machine is worth (common practice), so the
+ * machine is graded no better than Poor, "major repairs needed before productive use", however well
+ * the rest of it measures.
+ */
+const DEAL_BREAKER_CEILING: ConditionGrade = 'Poor';
+
 const DEAL_BREAKER_TEXT: Readonly<Record<DealBreakerId, string>> = {
-  crackedCasting: 'Cracked casting: a deal-breaker; it heads the report and changes the premise of value.',
-  growlingSpindleBearings: 'Growling spindle bearings: a deal-breaker; it heads the report and changes the premise of value.',
-  brokenGearTeeth: 'Broken gear teeth: a deal-breaker; it heads the report and changes the premise of value.',
-  motorCannotRunOnSupply: 'The motor cannot run on the stated supply: a deal-breaker; it heads the report and changes the premise of value.',
+  crackedCasting: 'Cracked casting: a deal-breaker; graded no better than Poor; it heads the report and changes the premise of value.',
+  growlingSpindleBearings: 'Growling spindle bearings: a deal-breaker; graded no better than Poor; it heads the report and changes the premise of value.',
+  brokenGearTeeth: 'Broken gear teeth: a deal-breaker; graded no better than Poor; it heads the report and changes the premise of value.',
+  motorCannotRunOnSupply: 'The motor cannot run on the stated supply: a deal-breaker; graded no better than Poor; it heads the report and changes the premise of value.',
 };
 
 const SEEN = 'Seen by the inspector on site; see the photos.';
@@ -57,7 +64,7 @@ export function damageFindingsFrom(survey: ParsedLatheSurvey): DamageFinding[] {
   for (const item of DEAL_BREAKER_ITEMS) {
     const answer = survey.dealBreakers?.[item.id];
     if (!answer?.present) continue;
-    found.push({ id: item.id, label: item.label, evidence: answer.note?.trim() || SEEN, consequence: 'deal-breaker', gradeCeiling: null, text: DEAL_BREAKER_TEXT[item.id] });
+    found.push({ id: item.id, label: item.label, evidence: answer.note?.trim() || SEEN, consequence: 'deal-breaker', gradeCeiling: DEAL_BREAKER_CEILING, text: DEAL_BREAKER_TEXT[item.id] });
   }
   for (const item of HIDDEN_DAMAGE_ITEMS) {
     const answer = survey.hiddenDamage?.[item.id];

@@ -9,18 +9,27 @@ export function percentGoodByAgeLife(effectiveAgeYears: number, normalUsefulLife
 }
 
 /**
- * Effective age: where the machine's condition puts it on its life line. The age implied by the
- * condition grade (life × (1 − percent good for that grade)) is averaged with the actual age,
- * capped at the life; without a year, the condition alone decides (Waygrade rule, common practice).
+ * Percent good that levels off: straight-line age-life on the share above the residual,
+ * residual + (1 − residual) × (1 − age / life), never below the residual [memory: published
+ * percent-good tables for machinery level off rather than reach zero]. With residual 0 it is the
+ * plain straight line above.
+ */
+export function percentGoodLevelled(effectiveAgeYears: number, normalUsefulLifeYears: number, residual: number): number {
+  return residual + (1 - residual) * percentGoodByAgeLife(effectiveAgeYears, normalUsefulLifeYears, 0);
+}
+
+/**
+ * Effective age for the breakdown method: the actual age. Condition is not allowed to move it,
+ * because the wear the findings call for is already deducted as the cost to cure; moving the age
+ * as well would count the same wear twice. Without a year, the age the condition grade implies on
+ * the straight line, life × (1 − percent good for that grade), is the only evidence there is.
  */
 export function effectiveAge(
   actualAgeYears: number | null,
   conditionPercentGood: number | null,
   normalUsefulLifeYears: number,
 ): number | null {
-  const byCondition = conditionPercentGood === null ? null : normalUsefulLifeYears * (1 - conditionPercentGood);
-  const byAge = actualAgeYears === null ? null : Math.min(Math.max(0, actualAgeYears), normalUsefulLifeYears);
-  if (byCondition === null) return byAge;
-  if (byAge === null) return byCondition;
-  return (byAge + byCondition) / 2;
+  if (actualAgeYears !== null) return Math.max(0, actualAgeYears);
+  if (conditionPercentGood !== null) return normalUsefulLifeYears * (1 - conditionPercentGood);
+  return null;
 }

@@ -4,7 +4,7 @@ import { useMemo, useState } from 'react';
 import { Card } from '@/components/ui/card';
 import { INPUT_CLASS } from '@/components/forms/field';
 import { DecisionInputError } from '@/lib/decision/decision-input-error';
-import { landedCost } from '@/lib/decision/landed-cost';
+import { landedCost, type RepairSplit } from '@/lib/decision/landed-cost';
 import type { SupplyAssessment } from '@/lib/decision/phase-converter';
 import { DEMO_RIGGING_RATES, estimateRigging, SITE_ACCESS, SITE_ACCESS_LABELS, STARTING_RIGGING_DISTANCE_KM, type SiteAccess } from '@/lib/decision/rigging-estimate';
 import { formatMoney } from '@/lib/format';
@@ -13,6 +13,8 @@ export interface LandedCostFacts {
   currency: string;
   askingPriceMinor: number | null;
   repairsMinor: number | null;
+  /** The valuation's repair split (before use, accuracy, unmeasured allowance), when the result has one. */
+  repairSplit: RepairSplit | null;
   /** null when the seller has listed no inclusions, so nothing is known to be missing. */
   missingToolingMinor: number | null;
   supply: SupplyAssessment;
@@ -78,6 +80,7 @@ export function LandedCostPanel({ facts }: { facts: LandedCostFacts }) {
         converter: converter && converter.currency === c ? converter : null,
         missingTooling: facts.missingToolingMinor === null ? null : { amountMinor: facts.missingToolingMinor, currency: c },
         repairs: facts.repairsMinor === null ? null : { amountMinor: facts.repairsMinor, currency: c },
+        repairSplit: facts.repairSplit,
       });
       return { ok: true as const, rigging, cost };
     } catch (e) {

@@ -23,6 +23,7 @@ import { CurrencyBanner } from './currency-banner';
 import { DisclosurePanel } from './disclosure-panel';
 import { InclusionsPanel } from './inclusions-panel';
 import { LandedCostPanel } from './landed-cost-panel';
+import { repairSplitFrom } from '@/lib/decision/repair-split';
 import { ReinspectionPanel } from './reinspection-panel';
 import { reinspectionOffer } from '@/lib/reinspection/offer';
 import { ThermalStatesPanel } from './thermal-states-panel';
@@ -35,7 +36,7 @@ const LOCKED_CONTENTS = [
   'The bed profile and the tailstock alignment, drawn',
   'The inspector’s photos with captions',
   'Repair estimate, line by line',
-  'Fair market, orderly and forced liquidation values with the working',
+  'Fair market, orderly and forced liquidation values: premise, effective date, the sales comparison grid and the cost approach, with the working',
   'Inspector, reviewer, dates and a verification code',
 ];
 
@@ -244,6 +245,7 @@ export default async function ReportSummaryPage({
             currency: facts.currency,
             askingPriceMinor: facts.askingPriceMinor,
             repairsMinor: facts.repairEstimateMinor,
+            repairSplit: facts.repairEstimateMinor === null ? null : repairSplitFrom(facts.result, facts.currency),
             missingToolingMinor: missingToolingMinor(facts.inclusions, facts.currency),
             supply: assessSupply(
               facts.nameplate ? { ...facts.nameplate, motorKw: facts.result.machine.motorPowerKw ?? facts.motorKw } : null,
