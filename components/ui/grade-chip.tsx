@@ -24,9 +24,9 @@ export function GradeGauge({ grade, className = '' }: { grade: ConditionGrade; c
 
 /**
  * A compact grade for dense tables: the gauge and the word, optionally the score. `null` means the
- * subsystem had no measured check.
+ * subsystem had no measured check. A provisional grade (too little measured to be firm) says so in words.
  */
-export function GradeChip({ grade, score }: { grade: ConditionGrade | null; score?: number | null }) {
+export function GradeChip({ grade, score, provisional = false }: { grade: ConditionGrade | null; score?: number | null; provisional?: boolean }) {
   if (!grade) {
     return (
       <span className="inline-flex items-center gap-1 whitespace-nowrap text-sm text-ink-faint" title="No measured check in this subsystem">
@@ -35,9 +35,13 @@ export function GradeChip({ grade, score }: { grade: ConditionGrade | null; scor
     );
   }
   return (
-    <span className={`inline-flex items-center gap-1.5 whitespace-nowrap text-sm font-medium ${GRADE_TEXT[grade]}`} title={score === undefined || score === null ? grade : `${grade}, score ${score} of 100`}>
+    <span
+      className={`inline-flex items-center gap-1.5 whitespace-nowrap text-sm font-medium ${GRADE_TEXT[grade]}`}
+      title={`${grade}${score === undefined || score === null ? '' : `, score ${score} of 100`}${provisional ? ', provisional: too little of the machine was measured for a firm grade' : ''}`}
+    >
       <GradeGauge grade={grade} />
       {grade}
+      {provisional ? <span className="font-normal text-ink-soft">, provisional</span> : null}
     </span>
   );
 }

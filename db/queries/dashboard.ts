@@ -4,6 +4,8 @@ import { db } from '@/db/client';
 import { inspections, machines, orders, reportAccessGrants, reports, users } from '@/db/schema';
 import type { MachineSearch } from '@/lib/validation/list-filters';
 import { makerOrModelContains } from './like-pattern';
+import { provisionalOf } from './report-provisional';
+import { sealedMachineOf } from './sealed-machine';
 
 /** Machines per page of a seller's list. */
 export const SELLER_MACHINES_PAGE_SIZE = 25;
@@ -70,13 +72,15 @@ export async function listRecentReleasedReports(limit: number) {
   return db
     .select({
       id: reports.id,
-      maker: machines.maker,
-      model: machines.model,
-      swingMm: machines.swingMm,
-      betweenCentresMm: machines.betweenCentresMm,
-      yearBuilt: machines.yearBuilt,
-      town: machines.town,
+      // As sealed with the version: the listing may have been edited since.
+      maker: sealedMachineOf().maker,
+      model: sealedMachineOf().model,
+      swingMm: sealedMachineOf().swingMm,
+      betweenCentresMm: sealedMachineOf().betweenCentresMm,
+      yearBuilt: sealedMachineOf().yearBuilt,
+      town: sealedMachineOf().town,
       overallCondition: reports.overallCondition,
+      overallProvisional: provisionalOf(),
       releasedAt: reports.releasedAt,
     })
     .from(reports)
@@ -91,9 +95,10 @@ export async function listGrantedReports(userId: string) {
   return db
     .select({
       reportId: reports.id,
-      maker: machines.maker,
-      model: machines.model,
+      maker: sealedMachineOf().maker,
+      model: sealedMachineOf().model,
       overallCondition: reports.overallCondition,
+      overallProvisional: provisionalOf(),
       reason: reportAccessGrants.reason,
       grantedAt: reportAccessGrants.grantedAt,
       amountMinor: orders.amountMinor,

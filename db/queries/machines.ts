@@ -2,6 +2,7 @@ import 'server-only';
 import { and, asc, count, desc, eq } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { inspections, inspectionStatusEvents, machineDisclosures, machineInclusions, machineMovingSheets, machines, reports, users } from '@/db/schema';
+import { provisionalOf } from './report-provisional';
 
 /** One machine as its seller (or a coordinator) sees it. */
 export async function getMachine(machineId: number) {
@@ -53,7 +54,7 @@ export async function listMachineInspections(machineId: number) {
         .orderBy(asc(inspectionStatusEvents.createdAt), asc(inspectionStatusEvents.id))
     : [];
   const releasedReports = await db
-    .select({ id: reports.id, inspectionId: reports.inspectionId, version: reports.version, overallCondition: reports.overallCondition, verificationCode: reports.verificationCode, releasedAt: reports.releasedAt })
+    .select({ id: reports.id, inspectionId: reports.inspectionId, version: reports.version, overallCondition: reports.overallCondition, overallProvisional: provisionalOf(), verificationCode: reports.verificationCode, releasedAt: reports.releasedAt })
     .from(reports)
     .where(and(eq(reports.machineId, machineId), eq(reports.status, 'released')))
     .orderBy(desc(reports.version));

@@ -5,6 +5,7 @@ import { db } from '@/db/client';
 import { machines, orders, reportAccessGrants, reports, users, ORDER_STATUSES } from '@/db/schema';
 import type { Database } from '@/db/client';
 import { sealedMachineOf } from './sealed-machine';
+import { provisionalOf } from './report-provisional';
 
 type Reader = Pick<Database, 'select'>;
 
@@ -56,6 +57,7 @@ export async function listDownloadableReports(userId: string) {
       version: newest.version,
       status: newest.status,
       overallCondition: newest.overallCondition,
+      overallProvisional: provisionalOf(newest),
       releasedAt: newest.releasedAt,
       supersededById: newest.supersededById,
       maker: sealedMachineOf(newest).maker,

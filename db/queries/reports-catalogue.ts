@@ -5,6 +5,7 @@ import { inspectionFees, machines, reportAccessGrants, reports } from '@/db/sche
 import type { MachineSearch } from '@/lib/validation/list-filters';
 import { makerOrModelContains } from './like-pattern';
 import { sealedMachineOf } from './sealed-machine';
+import { provisionalOf } from './report-provisional';
 
 /** Machines per page of the catalogue: a dozen rows of two cards. */
 export const CATALOGUE_PAGE_SIZE = 24;
@@ -16,6 +17,7 @@ const catalogueColumns = {
   id: reports.id,
   version: reports.version,
   overallCondition: reports.overallCondition,
+  overallProvisional: provisionalOf(),
   releasedAt: reports.releasedAt,
   machineId: machines.id,
   // What the released version states, not what the listing says today.

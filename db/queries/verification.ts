@@ -3,6 +3,7 @@ import { and, desc, eq, ne } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { machines, reportPdfs, reports } from '@/db/schema';
 import { sealedMachineOf } from './sealed-machine';
+import { provisionalOf } from './report-provisional';
 
 /** What the public may learn from a verification code: genuineness and version, nothing paid for. */
 export async function findReportByVerificationCode(code: string) {
@@ -16,6 +17,7 @@ export async function findReportByVerificationCode(code: string) {
       withdrawnAt: reports.withdrawnAt,
       // Open to everyone in the catalogue too; the checks, photos and values are not.
       overallCondition: reports.overallCondition,
+      overallProvisional: provisionalOf(),
       // As sealed with the version: the listing may have been edited since.
       maker: sealedMachineOf().maker,
       model: sealedMachineOf().model,

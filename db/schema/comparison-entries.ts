@@ -1,4 +1,4 @@
-import { date, decimal, index, int, mysqlEnum, mysqlTable, smallint, varchar } from 'drizzle-orm/mysql-core';
+import { boolean, date, decimal, index, int, mysqlEnum, mysqlTable, smallint, varchar } from 'drizzle-orm/mysql-core';
 import { minorUnits, timestamp } from './columns';
 import { LATHE_KINDS } from './machines';
 import { CONDITION_GRADES } from './reports';
@@ -32,6 +32,8 @@ export const comparisonEntries = mysqlTable(
     priceCurrency: varchar('price_currency', { length: 3 }).notNull(),
     overallCondition: mysqlEnum('overall_condition', CONDITION_GRADES).notNull(),
     overallScore: smallint('overall_score').notNull(),
+    /** The scoring result marks the grade provisional (too little measured for a firm grade). */
+    overallProvisional: boolean('overall_provisional').notNull().default(false),
     confidence: decimal('confidence', { precision: 4, scale: 3 }).notNull(),
     fairMarketValueMinor: minorUnits('fair_market_value_minor'),
     repairEstimateMinor: minorUnits('repair_estimate_minor'),

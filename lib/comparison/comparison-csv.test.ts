@@ -17,6 +17,7 @@ const row = (overrides: Partial<ComparisonRow> = {}): ComparisonRow => ({
   region: 'Brenmark',
   overallCondition: 'Good',
   overallScore: 68,
+  overallProvisional: false,
   confidence: 0.954,
   askingPriceMinor: 640_000,
   priceCurrency: 'EUR',
@@ -74,6 +75,12 @@ describe('comparisonCsv', () => {
       'Report current until (UTC)': '2026-05-21',
       'Report stale': 'stale',
     });
+  });
+
+  it('says whether the grade is firm or provisional beside it', () => {
+    const [firm, provisional] = parse(comparisonCsv([row(), row({ overallProvisional: true })]));
+    expect(firm).toMatchObject({ 'Overall condition': 'Good', 'Grade firm or provisional': 'firm' });
+    expect(provisional).toMatchObject({ 'Overall condition': 'Good', 'Grade firm or provisional': 'provisional' });
   });
 
   it('leaves the report’s figures blank for a report not bought', () => {

@@ -23,6 +23,7 @@ const CSV_COLUMNS: ReadonlyArray<[header: string, value: (row: ComparisonRow) =>
   ['Region', (r) => r.region],
   ['Overall condition', (r) => r.overallCondition],
   ['Overall score (0-100)', (r) => r.overallScore],
+  ['Grade firm or provisional', (r) => (r.overallProvisional ? 'provisional' : 'firm')],
   ...SUBSYSTEMS.map((id): [string, (r: ComparisonRow) => string] => [`${SUBSYSTEM_TABLE[id].label} grade`, (r) => r.subsystems[SUBSYSTEM_KEYS[id]].grade ?? '']),
   ['Confidence (%)', (r) => Math.round(r.confidence * 100)],
   ['Asking price', (r) => euros(r.askingPriceMinor)],

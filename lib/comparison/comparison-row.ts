@@ -19,6 +19,8 @@ export type ComparisonRow = {
   region: string;
   overallCondition: ConditionGrade;
   overallScore: number;
+  /** Too little was measured for a firm grade: the grade is shown as provisional. */
+  overallProvisional: boolean;
   /** 0–1: share of the survey's checks that were measured. */
   confidence: number;
   askingPriceMinor: number | null;

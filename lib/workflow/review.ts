@@ -34,6 +34,9 @@ export const releaseReport = defineOperation({
     // As sealed with the version, so the e-mail names the machine the report names.
     const { maker, model, serialNumber } = released.machineSnapshot;
     const machineSummary = { maker, model, serialNumber };
+    // A provisional grade is named so wherever it is told, e-mails included.
+    const releasedResult = (typeof released.result === 'string' ? JSON.parse(released.result) : released.result) as { provisional?: boolean };
+    const overallCondition = releasedResult.provisional === true ? `${released.overallCondition}, provisional` : released.overallCondition;
     await enqueueEmail(tx, {
       to: machine!.sellerEmail,
       template: 'report-released',
@@ -43,7 +46,7 @@ export const releaseReport = defineOperation({
         machine: machineSummary,
         reportCode: released.verificationCode,
         version: released.version,
-        overallCondition: released.overallCondition,
+        overallCondition,
         url: appLink(`/machines/${machine!.id}`),
       },
     });
@@ -67,7 +70,7 @@ export const releaseReport = defineOperation({
       inspectionId: inspection.id,
       reportId: released.id,
       reportCode: released.verificationCode,
-      overallCondition: released.overallCondition,
+      overallCondition,
       machine: machineSummary,
     });
     for (const buyer of earlierBuyers) {
@@ -81,7 +84,7 @@ export const releaseReport = defineOperation({
           machine: machineSummary,
           reportCode: released.verificationCode,
           version: released.version,
-          overallCondition: released.overallCondition,
+          overallCondition,
           url: appLink('/purchases'),
         },
       });

@@ -137,7 +137,11 @@ describe('survey submission', () => {
   it('scores a complete survey on the server, stores the draft report with the scoring version and moves the inspection to review', async () => {
     const { inspector, inspectionId, machineId } = await bookedInspection({ start: true });
     await recordedPhoto(inspectionId, machineId, inspector.id);
-    const saved = await saveSurvey.execute(inspector, { inspectionId: String(inspectionId), baseVersion: 1, data: nearNew as LatheSurvey });
+    // 0.02 mm cross-slide backlash instead of the example's 0.04 puts the score at 95.52: a fraction that
+    // rounding would carry up, so storing it cut is seen.
+    const survey = structuredClone(nearNew) as LatheSurvey;
+    survey.slidesAndScrews!.crossSlideBacklash = { method: 'length', backlash: { value: 0.02, unit: 'mm' } };
+    const saved = await saveSurvey.execute(inspector, { inspectionId: String(inspectionId), baseVersion: 1, data: survey });
     expect(saved).toEqual({ ok: true, data: { version: 2 } });
 
     const outcome = await submitSurvey.execute(inspector, { inspectionId: String(inspectionId), baseVersion: 2 });
@@ -146,7 +150,7 @@ describe('survey submission', () => {
 
     const [report] = await db.select().from(reports).where(eq(reports.inspectionId, inspectionId));
     expect(report).toMatchObject({ status: 'draft', scoringVersion: SCORING_VERSION, surveyVersion: 2, inspectorId: inspector.id });
-    // The overall score is stored cut to whole points, as shown beside its grade (95.51 is stored as 95, not 96).
+    // The overall score is stored cut to whole points, as shown beside its grade (95.52 is stored as 95, not 96).
     const result = (typeof report!.result === 'string' ? JSON.parse(report!.result) : report!.result) as { overall: { score: number } };
     expect(result.overall.score % 1).toBeGreaterThanOrEqual(0.5);
     expect(report!.overallScore).toBe(Math.floor(result.overall.score));

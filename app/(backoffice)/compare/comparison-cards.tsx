@@ -51,7 +51,7 @@ export function ComparisonCards({
               </div>
             </div>
             <div className="mt-3 flex flex-wrap items-center justify-between gap-2">
-              <GradeChip grade={r.overallCondition} score={r.overallScore} />
+              <GradeChip grade={r.overallCondition} score={r.overallScore} provisional={r.overallProvisional} />
               <span className="figures text-sm text-ink-soft">{Math.round(r.confidence * 100)} % measured</span>
             </div>
             <div className="mt-2">

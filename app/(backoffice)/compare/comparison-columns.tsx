@@ -70,7 +70,7 @@ export const COMPARISON_COLUMNS: ColumnDef<ComparisonRow, unknown>[] = [
     meta: { group: 'grades', label: 'Overall condition' },
     cell: ({ row: { original: r } }) => (
       <span className="flex flex-col">
-        <GradeChip grade={r.overallCondition} score={r.overallScore} />
+        <GradeChip grade={r.overallCondition} score={r.overallScore} provisional={r.overallProvisional} />
         <span className="figures text-xs text-ink-soft">{r.overallScore} / 100</span>
       </span>
     ),

@@ -22,7 +22,7 @@ export async function BuyerOverview({ userId }: { userId: string }) {
                     Swing {formatMm(r.swingMm)} · {r.town} · released {formatDate(r.releasedAt)}
                   </p>
                 </div>
-                <span className="rounded-full border border-line-strong px-3 py-0.5 text-sm font-medium">{r.overallCondition}</span>
+                <span className="rounded-full border border-line-strong px-3 py-0.5 text-sm font-medium">{r.overallCondition}{r.overallProvisional ? ', provisional' : ''}</span>
               </li>
             ))}
           </ul>
@@ -36,7 +36,7 @@ export async function BuyerOverview({ userId }: { userId: string }) {
             {granted.map((g) => (
               <li key={g.reportId} className="flex flex-wrap items-baseline justify-between gap-2 py-3">
                 <p className="font-medium">
-                  {g.maker} {g.model} · {g.overallCondition}
+                  {g.maker} {g.model} · {g.overallCondition}{g.overallProvisional ? ', provisional' : ''}
                 </p>
                 <p className="figures text-sm text-ink-soft">
                   {formatDate(g.grantedAt)} · {g.reason === 'purchase' ? formatMoney(g.amountMinor, g.currency ?? 'EUR') : 'free'}

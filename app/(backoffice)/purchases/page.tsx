@@ -70,7 +70,7 @@ export default async function PurchasesPage({ searchParams }: { searchParams: Pr
                   </p>
                 </div>
                 <div className="flex items-center gap-3">
-                  <ConditionBadge grade={d.overallCondition} />
+                  <ConditionBadge grade={d.overallCondition} provisional={d.overallProvisional} />
                   <DownloadLink reportId={d.reportId} label={`Download v${d.version}`} quiet={Boolean(d.supersededById)} />
                 </div>
               </li>

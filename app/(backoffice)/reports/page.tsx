@@ -67,7 +67,7 @@ export default async function ReportsCataloguePage({ searchParams }: { searchPar
                       {r.town}, {r.region} · released {formatDate(r.releasedAt)}
                     </p>
                   </div>
-                  <ConditionBadge grade={r.overallCondition} />
+                  <ConditionBadge grade={r.overallCondition} provisional={r.overallProvisional} />
                 </div>
                 <div className="mt-4 flex flex-wrap items-center justify-between gap-3">
                   <p className="figures text-sm">

@@ -84,7 +84,7 @@ export default async function VerifyCodePage({ params }: { params: Promise<{ cod
             ) : null}
             <dt className="text-ink-soft">Overall condition</dt>
             <dd>
-              <ConditionBadge grade={report.overallCondition} />
+              <ConditionBadge grade={report.overallCondition} provisional={report.overallProvisional} />
             </dd>
           </dl>
           {report.newerVersion && report.status !== 'withdrawn' ? (

@@ -68,7 +68,7 @@ const FIGURES: ReadonlyArray<[string, (e: ComparisonEntry, details: boolean, rea
   ['Between centres', (e) => formatMm(e.betweenCentresMm)],
   ['Year built', (e) => e.yearBuilt ?? '—'],
   ['Location', (e) => `${e.town}, ${e.region}`],
-  ['Overall condition', (e) => <GradeChip grade={e.overallCondition} score={e.overallScore} />],
+  ['Overall condition', (e) => <GradeChip grade={e.overallCondition} score={e.overallScore} provisional={e.overallProvisional} />],
   ['Overall score', (e) => `${e.overallScore} / 100`],
   ['Confidence', (e) => `${Math.round(Number(e.confidence) * 100)} %`],
   ['Asking price', (e) => formatMoney(e.askingPriceMinor, e.priceCurrency)],

@@ -94,7 +94,7 @@ export default async function MachinePage({ params }: { params: Promise<{ machin
                   <p className="font-medium">Released report</p>
                   {current.reports.map((r) => (
                     <p key={r.id} className="figures text-sm">
-                      Version {r.version} · {r.overallCondition} · released {formatDate(r.releasedAt)} · code {r.verificationCode}
+                      Version {r.version} · {r.overallCondition}{r.overallProvisional ? ', provisional' : ''} · released {formatDate(r.releasedAt)} · code {r.verificationCode}
                     </p>
                   ))}
                 </div>

@@ -63,7 +63,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ inspect
         <>
           <ReviewDealBreakers result={result} />
           <section aria-label="Summary" className="mt-6 grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
-            <Stat label="Overall condition" value={report.overallCondition} sub={`score ${report.overallScore} of 100`} />
+            <Stat label="Overall condition" value={result.provisional ? `${report.overallCondition}, provisional` : report.overallCondition} sub={`score ${report.overallScore} of 100`} />
             <Stat label="Confidence" value={`${Math.round(Number(report.confidence) * 100)} %`} sub={`${result.confidence.measuredChecks} of ${result.confidence.totalChecks} checks measured`} />
             <Stat label="Repair estimate" value={formatMoney(report.repairEstimateMinor, report.currency)} sub={`${result.repairEstimate.lines.length} repair actions`} />
             <Stat label="Fair market value" value={formatMoney(report.fairMarketValueMinor, report.currency)} sub={`version ${report.version} · ${report.status}`} />
