@@ -165,7 +165,7 @@ export function ValuationSection({ result, signers }: { result: ScoringResult; s
         ).map(([label, value, basis], i) => (
           <View key={label} style={{ ...styles.panel, width: '32%', borderTopWidth: i === 0 ? 2.5 : 0, borderTopColor: COLOURS.copper }}>
             <Text style={styles.factLabel}>{label}</Text>
-            <Text style={{ fontSize: i === 0 ? (range ? 12 : 16) : 13, fontWeight: 600, ...styles.figures }}>{value}</Text>
+            <Text style={{ fontSize: i === 0 ? (range ? 12 : 16) : 13, fontWeight: 600, ...styles.figures, lineHeight: 1.3, marginBottom: 1 }}>{value}</Text>
             <Text style={{ ...styles.small, fontSize: 7 }}>{basis}</Text>
           </View>
         ))}
