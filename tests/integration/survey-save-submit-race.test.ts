@@ -1,8 +1,8 @@
 import { setTimeout as sleep } from 'node:timers/promises';
-import { eq } from 'drizzle-orm';
-import { afterAll, describe, expect, it } from 'vitest';
+import { and, desc, eq, gt } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDatabase, db } from '@/db/client';
-import { reports, surveys } from '@/db/schema';
+import { emailOutbox, reports, surveys } from '@/db/schema';
 import type { LatheSurvey } from '@/lib/scoring';
 import { saveSurvey } from '@/lib/survey/server/save-survey';
 import { submitSurvey } from '@/lib/survey/server/submit-survey';
@@ -11,7 +11,17 @@ import { bookedInspection, recordedPhoto } from './survey-fixtures';
 
 const ROUNDS = Number(process.env.RACE_ROUNDS ?? 40);
 
+let outboxBefore = 0;
+
+beforeAll(async () => {
+  const [last] = await db.select({ id: emailOutbox.id }).from(emailOutbox).orderBy(desc(emailOutbox.id)).limit(1);
+  outboxBefore = last?.id ?? 0;
+});
+
 afterAll(async () => {
+  // Each submission mails every coordinator the test database has gathered: hundreds of mails to
+  // invented addresses that would keep the running app's outbox busy for minutes after this file.
+  await db.delete(emailOutbox).where(and(gt(emailOutbox.id, outboxBefore), eq(emailOutbox.template, 'survey-submitted')));
   await closeDatabase();
 });
 
