@@ -7,7 +7,8 @@ import safetyDefect from '../examples/safety-defect.json';
 import worn from '../examples/worn.json';
 import sales from '../examples/sales/comparable-sales.json';
 import { scoreSurvey } from '../score-survey';
-import { CONDITION_GRADES } from '../grading/condition-scale';
+import { CONDITION_GRADES, gradeRank } from '../grading/condition-scale';
+import { HIDDEN_DAMAGE_ITEMS } from '../survey/checklist-items';
 import { money } from '../money';
 import { SALE_KINDS } from './valuation-tables';
 import type { ComparableSale } from './valuation-types';
@@ -41,6 +42,24 @@ describe('value of a scored survey', () => {
         expect(fmv(partial, comparableSales)).toBeLessThanOrEqual(fmv(full, comparableSales));
       }),
       { numRuns: 150 },
+    );
+  });
+
+  it('never values a better grade than the report states, with damage holding the grade and sections left out', () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...Object.keys(SURVEYS)),
+        fc.subarray(HIDDEN_DAMAGE_ITEMS.map((i) => i.id)),
+        fc.subarray(SECTIONS),
+        (name, damage, dropped) => {
+          const survey: Record<string, unknown> = { ...SURVEYS[name]!, hiddenDamage: Object.fromEntries(damage.map((id) => [id, { present: true }])) };
+          for (const s of dropped) delete survey[s];
+          const result = scoreSurvey(survey, { comparableSales: sales as ComparableSale[], asOfYear: 2025 });
+          if (result.overall.condition === null) return;
+          expect(gradeRank(result.valuation.conditionValued!)).toBeGreaterThanOrEqual(gradeRank(result.overall.condition));
+        },
+      ),
+      { numRuns: 120 },
     );
   });
 

@@ -1,5 +1,5 @@
 import { fmt } from '../format-number';
-import type { ConditionGrade } from '../grading/condition-scale';
+import { gradeRank, type ConditionGrade } from '../grading/condition-scale';
 import { formatMoney, money, type Money } from '../money';
 import type { RepairEstimate } from '../repair/repair-estimate';
 import { costApproach } from './cost-approach';
@@ -37,6 +37,11 @@ interface Approaches {
   orderly: SalesComparison | null;
   forced: SalesComparison | null;
   notes: string[];
+}
+
+/** The worse of two grades; an ungraded worst case leaves the grade found. */
+function worseOf(found: ConditionGrade, worst: ConditionGrade | null): ConditionGrade {
+  return worst !== null && gradeRank(worst) > gradeRank(found) ? worst : found;
 }
 
 function premiseOf(dealBreakers: readonly { label: string }[]): ValuePremise {
@@ -117,7 +122,8 @@ export function valueMachine(input: ValueMachineInput): Valuation {
   const graded = partsPremise ? 'Salvage' : input.condition;
   const worst = input.worstCase;
   // With nothing graded there is no evidence to take at its worst: no grade is valued rather than a guess.
-  const valued = worst && graded !== null ? (partsPremise ? 'Salvage' : worst.condition) : graded;
+  // The worst case never values a better grade than the one found (damage can hold the grade lower).
+  const valued = worst && graded !== null ? worseOf(graded, worst.condition) : graded;
   const repairsValued = worst ? worst.repairs : input.repairs;
   const shown = appraise(input, premise, valued, repairsValued.total);
   const notes = [...shown.notes];
@@ -126,7 +132,9 @@ export function valueMachine(input: ValueMachineInput): Valuation {
 
   let range: Valuation['range'] = null;
   if (worst && shown.reconciliation) {
-    const asMeasured = appraise(input, premise, graded, input.repairs.total).reconciliation;
+    // The same grade and cure as measured give the same figures: no second appraisal then.
+    const sameAsShown = valued === graded && repairsValued.total.amountMinor === input.repairs.total.amountMinor;
+    const asMeasured = sameAsShown ? shown.reconciliation : appraise(input, premise, graded, input.repairs.total).reconciliation;
     const low = shown.reconciliation.fairMarketValue;
     const high = money(Math.max(low.amountMinor, asMeasured?.fairMarketValue.amountMinor ?? low.amountMinor), c);
     const measuredPct = fmt(input.confidence * 100, 1);
