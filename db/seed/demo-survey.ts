@@ -157,7 +157,7 @@ export function demoSurvey(
     ],
     // Every power-on step comes after the inspector has confirmed the safety gate on site.
     safetyGate: { guardsOn: true, chuckKeyOut: true, workAndChuckSecure: true, emergencyStopAndBrakeTested: true, earthChecked: true },
-    // Started cold early in the visit and run before the readings (domain.md's power run). The minutes
+    // Started cold early in the visit and run before the readings (the power run). The minutes
     // follow the day of the month rather than the seeded random sequence, so the rest of the demo data
     // stays as it was, and demo reports show both cold readings (under 30 min) and warm ones.
     powerRun: {

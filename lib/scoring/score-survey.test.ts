@@ -51,7 +51,7 @@ describe('scoreSurvey on the example surveys', () => {
   });
 
   it('rejects levelling done with the stand loaded', () => {
-    // common practice (seed document): heavy items on the stand twist the bed, so levelling is
+    // common practice: heavy items on the stand twist the bed, so levelling is
     // only valid with the stand in its normal state
     const r = scoreSurvey(mostlyUnmeasured);
     expect(check(r, 'bed-straightness').status).toBe('not-measured');
@@ -120,7 +120,7 @@ describe('grading rules', () => {
   });
 
   it('grades the two-collar cut of 29.630/29.632 mm over 250 mm as sharp', () => {
-    // common practice (seed document): an excellent tailstock alignment
+    // common practice: an excellent tailstock alignment
     expect(check(scoreSurvey(nearNew), 'two-collar-test').band).toBe('sharp');
   });
 

@@ -1,5 +1,5 @@
 /**
- * Where a permissible value or formula comes from, in the three kinds domain.md uses:
+ * Where a permissible value or formula comes from, in three kinds:
  *  - src: a published standard, handbook or worked example, named;
  *  - memory: recalled from a named document without the text at hand;
  *  - practice: common shop practice with no published source (Waygrade's own rubric included).

@@ -1,7 +1,7 @@
 import type { Hazard } from './safety-cautions';
 
 /**
- * The survey screens in the on-site order of work (domain.md): one screen a section. `key` is the
+ * The survey screens in the on-site order of work (common practice): one screen a section. `key` is the
  * section's member in the survey format (null for the identity screen, which fills `machine`,
  * `instruments` and the date). `checks` are the scoring library's check ids whose bands the screen
  * shows beside its inputs.

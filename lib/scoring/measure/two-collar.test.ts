@@ -35,7 +35,7 @@ describe('two-collar test', () => {
 
 describe('tailstock alignment from an indicator run', () => {
   it('reports 0.02 mm offset toward the operator and the move to correct it', () => {
-    // common practice (seed document): an indicator run found 0.02 mm misalignment along the test bar
+    // common practice: an indicator run found 0.02 mm misalignment along the test bar
     const r = tailstockAlignmentFromIndicator(0, 0.02, 250);
     expect(r.offsetMm).toBeCloseTo(0.02, 9);
     expect(r.move).toBe('away-from-operator');

@@ -23,7 +23,7 @@ describe('V-belt span and deflection', () => {
   });
 
   it('puts a small lathe drive target at about 10 mm', () => {
-    // common practice (seed document): about 10 mm mid-span deflection on a small lathe drive
+    // common practice: about 10 mm mid-span deflection on a small lathe drive
     const span = beltSpanMm({ centreDistanceMm: 620, largePulleyDiameterMm: 150, smallPulleyDiameterMm: 75 });
     expect(Math.abs(deflectionBySixtyFourthRule(span) - 10)).toBeLessThan(1);
     expect(Math.abs(deflectionBySixteenPerMetreRule(span) - 10)).toBeLessThan(1);

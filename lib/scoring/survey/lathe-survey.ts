@@ -41,8 +41,8 @@ import {
 } from './condition-findings';
 
 /**
- * Survey format v1 for a manual centre lathe. Sections follow the on-site order of work in
- * domain.md; every section and every check inside it is optional, because an inspector may be
+ * Survey format v1 for a manual centre lathe. Sections follow the on-site order of work
+ * (common practice); every section and every check inside it is optional, because an inspector may be
  * unable to do a step (no test bar, machine not under power). Unfilled checks are reported as
  * "not measured" and lower the stated confidence — they never pass silently.
  */

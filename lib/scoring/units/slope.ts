@@ -3,7 +3,7 @@
  * mm per metre, arc-seconds, or inch per foot. Canonical unit inside the library: mm/m.
  *
  * arc-seconds: a slope of θ rad is 1000·tan θ mm/m; there are 206 264.8″ in a radian
- * (180·3600/π), so 1″ ≈ 4.848 µm/m (domain.md, [src: arithmetic]).
+ * (180·3600/π), so 1″ ≈ 4.848 µm/m ([src: arithmetic]).
  * in/ft: 1 in rise per 12 in run is 1/12 m/m = 83.33 mm/m.
  */
 export const SLOPE_UNITS = ['mm/m', 'arcsec', 'in/ft'] as const;
